@@ -44,7 +44,7 @@ export type ClinkerPhase = {
 
 const phasesById = new Map<ClinkerPhaseId, ClinkerPhase>(
   phaseData.phases.map((entry) => {
-    const elements = entry.elements as Record<string, number>;
+    const elements = entry.elements as unknown as Record<string, number>;
     const molarMass = molarMassGPerMol(elements);
     const phase: ClinkerPhase = {
       id: entry.id as ClinkerPhaseId,

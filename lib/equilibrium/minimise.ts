@@ -1,0 +1,306 @@
+import { solveInPlace } from "./dense-lu";
+import type { EquilibriumOutcome } from "./failure";
+import { assemble, cloneState, evaluateAqueous, memberTerms, solveFixedPhases, speciesAffinity, type SolverState } from "./newton";
+import { WATER_MOLAR_MASS_KG_PER_MOL, type EquilibriumProblem } from "./problem";
+import { solveLinearProgram } from "./simplex";
+
+/**
+ * Gibbs energy minimisation of a closed (or partly open) system by the element-potential method with an
+ * active phase set: Newton's method for the present phases (see `newton.ts`), then phase removal when an
+ * amount turns negative and phase addition by the largest positive saturation index, until no phase is
+ * supersaturated and none is present in negative amount (the Kuhn–Tucker conditions of the minimum;
+ * Smith & Missen 1982, §6.4). The cold start is the linear-programming initial approximation (Karpov,
+ * Chudnenko & Kulik 1997, Am. J. Sci. 297, 767); a warm start reuses a previous state.
+ *
+ * Limits: ideal mixing in solid solutions and gas; activity coefficients from the supplied aqueous model;
+ * 1 bar. Phase-rule violations (more pure phases than degrees of freedom) are resolved by swapping phases.
+ */
+export type MinimiseOptions = {
+  maxNewtonIterations?: number;
+  maxPhaseChanges?: number;
+  timeLimitMs?: number;
+  balanceTolerance?: number;
+  conditionTolerance?: number;
+  warmStart?: SolverState;
+};
+
+export type MinimiseReport = { state: SolverState; iterations: number; phaseChanges: number; warmStarted: boolean };
+
+/** Saturation index threshold (log10 units) above which an absent phase is added. */
+const ADD_THRESHOLD_LOG10 = 1e-9;
+const LN10 = Math.log(10);
+
+export function minimise(p: EquilibriumProblem, options: MinimiseOptions = {}): EquilibriumOutcome<MinimiseReport> {
+  const started = performance.now();
+  const limitMs = options.timeLimitMs ?? 5000;
+  const deadline = started + limitMs;
+  const newtonOptions = {
+    maxIterations: options.maxNewtonIterations ?? 200,
+    balanceTolerance: options.balanceTolerance ?? 1e-13,
+    conditionTolerance: options.conditionTolerance ?? 1e-11,
+    deadline,
+  };
+  if (options.warmStart && compatible(p, options.warmStart)) {
+    const warm = run(p, cloneState(options.warmStart), newtonOptions, options, deadline, started, limitMs);
+    if (warm.ok) return { ok: true, value: { ...warm.value, warmStarted: true } };
+  }
+  const start = coldStart(p);
+  if (!start.ok) return start;
+  const cold = run(p, start.value, newtonOptions, options, deadline, started, limitMs);
+  return cold.ok ? { ok: true, value: { ...cold.value, warmStarted: false } } : cold;
+}
+
+function compatible(p: EquilibriumProblem, s: SolverState): boolean {
+  return s.lambda.length === p.elements.length && s.amount.length === p.phases.length && s.lambda.every(Number.isFinite);
+}
+
+type NewtonOptions = Parameters<typeof solveFixedPhases>[2];
+
+function run(
+  p: EquilibriumProblem,
+  s: SolverState,
+  newtonOptions: NewtonOptions,
+  options: MinimiseOptions,
+  deadline: number,
+  started: number,
+  limitMs: number,
+): EquilibriumOutcome<Omit<MinimiseReport, "warmStarted">> {
+  const maxChanges = options.maxPhaseChanges ?? 4 * p.phases.length + 40;
+  const blocked = new Uint8Array(p.phases.length);
+  const visits = new Map<string, number>();
+  let iterations = 0;
+  let changes = 0;
+  let lastAdded = -1;
+  let beforeAdd: SolverState | undefined;
+  for (;;) {
+    if (performance.now() > deadline)
+      return { ok: false, error: { code: "time_limit", elapsedMs: performance.now() - started, limitMs, message: "time limit reached" } };
+    const outcome = solveFixedPhases(p, s, newtonOptions);
+    iterations += outcome.iterations;
+    if (!outcome.converged) {
+      if (outcome.unsupportedElement !== undefined) {
+        const candidate = bestCarrier(p, s, outcome.unsupportedElement, blocked);
+        if (candidate >= 0 && changes < maxChanges) {
+          s.active[candidate] = 1;
+          s.amount[candidate] = 0;
+          changes++;
+          continue;
+        }
+      }
+      if (lastAdded >= 0 && beforeAdd && changes < maxChanges) {
+        // The phase set with the last addition did not converge: go back and leave that phase out.
+        blocked[lastAdded] = 1;
+        Object.assign(s, cloneState(beforeAdd));
+        lastAdded = -1;
+        beforeAdd = undefined;
+        changes++;
+        continue;
+      }
+      return {
+        ok: false,
+        error: {
+          code: "no_convergence",
+          iterations,
+          residual: Math.max(outcome.balanceResidual, outcome.conditionResidual),
+          activePhases: activeIds(p, s),
+          message: outcome.singular ? "singular Newton matrix for the present phases" : "Newton iterations did not meet the tolerances",
+        },
+      };
+    }
+    // Remove the phase with the most negative amount, if any.
+    let worst = -1;
+    let worstAmount = 0;
+    s.active.forEach((on, k) => {
+      if (!on || p.phases[k].kind === "reservoir") return;
+      const relative = s.amount[k] / amountScale(p, k);
+      if (relative < worstAmount) {
+        worstAmount = relative;
+        worst = k;
+      }
+    });
+    if (worst >= 0 && worstAmount < -1e-14) {
+      if (++changes > maxChanges) return noConvergence(p, s, iterations, "too many phase changes");
+      s.active[worst] = 0;
+      s.amount[worst] = 0;
+      lastAdded = -1;
+      beforeAdd = undefined;
+      continue;
+    }
+    // Add the most supersaturated absent phase.
+    let best = -1;
+    let bestIndex = ADD_THRESHOLD_LOG10;
+    p.phases.forEach((phase, k) => {
+      if (s.active[k] || phase.suppressed || blocked[k] || phase.kind === "reservoir") return;
+      const si = phaseSaturationIndex(p, s, k);
+      if (si > bestIndex) {
+        bestIndex = si;
+        best = k;
+      }
+    });
+    if (best < 0) {
+      for (let k = 0; k < p.phases.length; k++) if (s.active[k] && s.amount[k] < 0 && p.phases[k].kind !== "reservoir") s.amount[k] = 0;
+      return { ok: true, value: { state: s, iterations, phaseChanges: changes } };
+    }
+    if (++changes > maxChanges) return noConvergence(p, s, iterations, "too many phase changes");
+    beforeAdd = cloneState(s);
+    lastAdded = best;
+    s.active[best] = 1;
+    s.amount[best] = 0;
+    if (p.phases[best].kind === "aqueous" && !Number.isFinite(s.lnIonicStrength)) s.lnIonicStrength = Math.log(1e-7);
+    if (isSingular(p, s)) {
+      // Phase rule: swap with a present phase whose removal restores a regular system.
+      let swapped = false;
+      for (let q = 0; q < p.phases.length && !swapped; q++) {
+        if (q === best || !s.active[q] || p.phases[q].kind === "reservoir" || p.phases[q].kind === "aqueous") continue;
+        s.active[q] = 0;
+        if (!isSingular(p, s)) {
+          s.amount[q] = 0;
+          swapped = true;
+        } else s.active[q] = 1;
+      }
+      if (!swapped) {
+        s.active[best] = 0;
+        blocked[best] = 1;
+        lastAdded = -1;
+        beforeAdd = undefined;
+      }
+    }
+    const key = activeIds(p, s).join("|");
+    const seen = (visits.get(key) ?? 0) + 1;
+    visits.set(key, seen);
+    if (seen > 3) return noConvergence(p, s, iterations, "the phase set cycles");
+  }
+}
+
+function noConvergence(p: EquilibriumProblem, s: SolverState, iterations: number, message: string): EquilibriumOutcome<never> {
+  return { ok: false, error: { code: "no_convergence", iterations, residual: NaN, activePhases: activeIds(p, s), message } };
+}
+
+function activeIds(p: EquilibriumProblem, s: SolverState): string[] {
+  return p.phases.filter((_, k) => s.active[k]).map((phase) => phase.id);
+}
+
+function isSingular(p: EquilibriumProblem, s: SolverState): boolean {
+  const a = assemble(p, s);
+  return !solveInPlace(a.matrix, a.rhs, a.size);
+}
+
+/** A typical magnitude of a phase amount, to judge "negative" relative to the system size. */
+function amountScale(p: EquilibriumProblem, k: number): number {
+  let total = 0;
+  for (let j = 0; j < p.totals.length; j++) total += p.totals[j];
+  return p.phases[k].kind === "aqueous" ? Math.max(total * WATER_MOLAR_MASS_KG_PER_MOL, 1e-300) : Math.max(total, 1e-300);
+}
+
+/**
+ * log10 of the saturation ratio Ω of a phase at the current element potentials: pure solid
+ * (a·λ − g)/ln10; solution or gas log10 Σ exp(a_i·λ − g_i); aqueous solution (ideal estimate)
+ * log10[a_w* (1 + M_w Σ m_i*)], where * marks values implied by λ.
+ */
+export function phaseSaturationIndex(p: EquilibriumProblem, s: SolverState, k: number): number {
+  const phase = p.phases[k];
+  if (phase.kind === "pure-solid" || phase.kind === "reservoir") return speciesAffinity(p, phase.species[0], s.lambda) / LN10;
+  if (phase.kind === "aqueous") {
+    let sum = 0;
+    let lnWater = 0;
+    for (const i of phase.species) {
+      if (i === p.water) lnWater = speciesAffinity(p, i, s.lambda);
+      else sum += Math.exp(Math.min(600, speciesAffinity(p, i, s.lambda)));
+    }
+    return (lnWater + Math.log1p(WATER_MOLAR_MASS_KG_PER_MOL * sum)) / LN10;
+  }
+  let sum = 0;
+  for (const v of memberTerms(p, k, s.lambda)) sum += v;
+  return Math.log(sum) / LN10;
+}
+
+/** The absent, allowed phase containing element j with the largest saturation index. */
+function bestCarrier(p: EquilibriumProblem, s: SolverState, j: number, blocked: Uint8Array): number {
+  const nE = p.elements.length;
+  let best = -1;
+  let bestIndex = -Infinity;
+  p.phases.forEach((phase, k) => {
+    if (s.active[k] || phase.suppressed || blocked[k]) return;
+    if (!phase.species.some((i) => p.stoich[i * nE + j] !== 0)) return;
+    const si = phaseSaturationIndex(p, s, k);
+    if (si > bestIndex) {
+      bestIndex = si;
+      best = k;
+    }
+  });
+  return best;
+}
+
+/**
+ * Initial approximation: minimise Σ n_i·g_i (mixing terms dropped; solutes on the mole-fraction scale,
+ * g_i − ln M_w) subject to the element and charge balances and n ≥ 0, with one extra row bounding the
+ * total amount so that the programme is bounded when fixed-pressure gases make the system open.
+ */
+function coldStart(p: EquilibriumProblem): EquilibriumOutcome<SolverState> {
+  const nE = p.elements.length;
+  const columns: { species: number; sign: number }[] = [];
+  p.species.forEach((sp, i) => {
+    const phase = p.phases[sp.phase];
+    if (phase.suppressed) return;
+    columns.push({ species: i, sign: 1 });
+    if (phase.kind === "reservoir") columns.push({ species: i, sign: -1 });
+  });
+  const m = nE + 1;
+  const n = columns.length + 1;
+  const a = new Float64Array(m * n);
+  const b = new Float64Array(m);
+  const c = new Float64Array(n);
+  let atomTotal = 0;
+  for (let j = 0; j < nE; j++) {
+    b[j] = p.totals[j];
+    atomTotal += p.totals[j];
+  }
+  b[nE] = 10 * atomTotal + 10;
+  const lnWaterMolarMass = Math.log(WATER_MOLAR_MASS_KG_PER_MOL);
+  columns.forEach(({ species: i, sign }, col) => {
+    for (let j = 0; j < nE; j++) a[j * n + col] = sign * p.stoich[i * nE + j];
+    a[nE * n + col] = 1;
+    const sp = p.species[i];
+    const solute = p.phases[sp.phase].kind === "aqueous" && i !== p.water;
+    c[col] = sign * (solute ? sp.g - lnWaterMolarMass : sp.g);
+  });
+  a[nE * n + n - 1] = 1; // slack of the bounding row
+  const lp = solveLinearProgram(a, b, c, m, n);
+  if (lp.status === "infeasible")
+    return { ok: false, error: { code: "infeasible_composition", infeasibility: lp.infeasibility, message: "no combination of the available species matches the element totals" } };
+  if (lp.status !== "optimal")
+    return { ok: false, error: { code: "no_convergence", iterations: lp.iterations, residual: NaN, activePhases: [], message: "initial linear programme hit its iteration limit" } };
+
+  const lambda = new Float64Array(nE);
+  for (let j = 0; j < nE; j++) lambda[j] = lp.duals[j];
+  // The LP treats solutes on the mole-fraction scale; shift so the molality scale is consistent.
+  const amount = new Float64Array(p.phases.length);
+  const active = new Uint8Array(p.phases.length);
+  columns.forEach(({ species: i, sign }, col) => {
+    const x = lp.x[col];
+    if (x <= 0) return;
+    const phase = p.species[i].phase;
+    const kind = p.phases[phase].kind;
+    if (kind === "aqueous") {
+      if (i === p.water) {
+        amount[phase] += x * WATER_MOLAR_MASS_KG_PER_MOL;
+        active[phase] = 1;
+      }
+    } else {
+      amount[phase] += sign * x;
+      active[phase] = 1;
+    }
+  });
+  p.phases.forEach((phase, k) => {
+    if (phase.kind === "reservoir") active[k] = 1;
+  });
+  let lnIonicStrength = Math.log(1e-7);
+  if (p.aqueous >= 0) {
+    const aq = evaluateAqueous(p, lambda, Math.log(1e-3));
+    let halfZ2m = 0;
+    for (const i of p.phases[p.aqueous].species) halfZ2m += 0.5 * p.species[i].charge ** 2 * aq.molality[i];
+    lnIonicStrength = Math.log(Math.min(1, Math.max(1e-8, halfZ2m)));
+    if (active[p.aqueous] && amount[p.aqueous] <= 0) amount[p.aqueous] = 1e-6;
+  }
+  return { ok: true, value: { lambda, amount, active, lnIonicStrength } };
+}

@@ -1,0 +1,370 @@
+import { solveInPlace } from "./dense-lu";
+import { WATER_MOLAR_MASS_KG_PER_MOL, type EquilibriumProblem } from "./problem";
+
+/**
+ * The state of the element-potential formulation (Gordon & McBride 1994, NASA RP-1311, ch. 2; Smith &
+ * Missen 1982, Chemical Reaction Equilibrium Analysis, ch. 6): dimensionless element potentials
+ * λ_j = μ_j/RT, the amount of each phase and which phases are present.
+ *
+ * Phase amounts: aqueous → kg of water W; solid solution or gas → total moles N; pure solid → moles;
+ * reservoir (fixed-pressure gas) → moles taken up from the reservoir (either sign).
+ * Species amounts follow from these at equilibrium:
+ *   aqueous solute   n_i = W·m_i,  m_i = exp(a_i·λ − g_i − ln γ_i(I))
+ *   water            n_w = W / M_w
+ *   solution member  n_i = N·exp(a_i·λ − g_i)
+ * and the unknowns are solved by Newton's method on
+ *   element balances    Σ_i a_ij n_i − b_j = 0
+ *   ionic strength      ln I − ln(½ Σ z_i² m_i) = 0
+ *   each present phase  pure: a_k·λ − g_k = 0; solution: ln Σ_i exp(a_i·λ − g_i) = 0;
+ *                       aqueous: a_w·λ − g_w − ln a_w = 0; reservoir: a_r·λ − g_r − ln p_r = 0.
+ * Activity coefficients enter through I with their exact derivatives, so convergence is quadratic.
+ */
+export type SolverState = {
+  lambda: Float64Array;
+  amount: Float64Array;
+  active: Uint8Array;
+  lnIonicStrength: number;
+};
+
+export function cloneState(s: SolverState): SolverState {
+  return { lambda: s.lambda.slice(), amount: s.amount.slice(), active: s.active.slice(), lnIonicStrength: s.lnIonicStrength };
+}
+
+const LN10 = Math.log(10);
+const MAX_EXPONENT = 600;
+const safeExp = (x: number) => Math.exp(x > MAX_EXPONENT ? MAX_EXPONENT : x);
+
+/** Aqueous quantities at the current λ and ionic strength. */
+export type AqueousEvaluation = {
+  ionicStrength: number;
+  molality: Float64Array; // per problem species (0 for non-solutes)
+  lnGamma: Float64Array;
+  /** d ln γ_i / d I */
+  dLnGammaDI: Float64Array;
+  totalMolality: number;
+  chargedMolality: number;
+  lnWaterActivity: number;
+  /** ∂ ln a_w / ∂(total molality, charged molality, I) */
+  dLnAw: [number, number, number];
+};
+
+export function evaluateAqueous(p: EquilibriumProblem, lambda: Float64Array, lnIonicStrength: number): AqueousEvaluation {
+  const nS = p.species.length;
+  const nE = p.elements.length;
+  const molality = new Float64Array(nS);
+  const lnGamma = new Float64Array(nS);
+  const dLnGammaDI = new Float64Array(nS);
+  const ionicStrength = Math.exp(lnIonicStrength);
+  let totalMolality = 0;
+  let chargedMolality = 0;
+  const cache = new Map<number, [number, number]>();
+  const gammaFor = (z: number): [number, number] => {
+    let entry = cache.get(z);
+    if (!entry) {
+      const h = 1e-5 * ionicStrength;
+      const up = p.activity.log10Gamma(z, ionicStrength + h);
+      const down = p.activity.log10Gamma(z, Math.max(0, ionicStrength - h));
+      entry = [LN10 * p.activity.log10Gamma(z, ionicStrength), (LN10 * (up - down)) / (ionicStrength + h - Math.max(0, ionicStrength - h))];
+      cache.set(z, entry);
+    }
+    return entry;
+  };
+  if (p.aqueous >= 0) {
+    for (const i of p.phases[p.aqueous].species) {
+      if (i === p.water) continue;
+      const [lg, dlg] = gammaFor(p.species[i].charge);
+      let t = -p.species[i].g - lg;
+      for (let j = 0; j < nE; j++) t += p.stoich[i * nE + j] * lambda[j];
+      const m = safeExp(t);
+      molality[i] = m;
+      lnGamma[i] = lg;
+      dLnGammaDI[i] = dlg;
+      totalMolality += m;
+      if (p.species[i].charge !== 0) chargedMolality += m;
+    }
+  }
+  const f = (mt: number, mc: number, is: number) => p.activity.lnWaterActivity(mt, mc, is);
+  const lnWaterActivity = f(totalMolality, chargedMolality, ionicStrength);
+  const d = (v: number) => 1e-6 * Math.max(v, 1e-12);
+  const hT = d(totalMolality);
+  const hC = d(chargedMolality);
+  const hI = d(ionicStrength);
+  const dLnAw: [number, number, number] = [
+    (f(totalMolality + hT, chargedMolality, ionicStrength) - lnWaterActivity) / hT,
+    (f(totalMolality, chargedMolality + hC, ionicStrength) - lnWaterActivity) / hC,
+    (f(totalMolality, chargedMolality, ionicStrength + hI) - lnWaterActivity) / hI,
+  ];
+  return { ionicStrength, molality, lnGamma, dLnGammaDI, totalMolality, chargedMolality, lnWaterActivity, dLnAw };
+}
+
+/** exp(a_i·λ − g_i) for the members of a solid solution or gas phase. */
+export function memberTerms(p: EquilibriumProblem, phase: number, lambda: Float64Array): Float64Array {
+  const nE = p.elements.length;
+  const members = p.phases[phase].species;
+  const y = new Float64Array(members.length);
+  members.forEach((i, k) => {
+    let t = -p.species[i].g;
+    for (let j = 0; j < nE; j++) t += p.stoich[i * nE + j] * lambda[j];
+    y[k] = safeExp(t);
+  });
+  return y;
+}
+
+/** a_i·λ − g_i of a species (its affinity of formation from the element potentials, in RT units). */
+export function speciesAffinity(p: EquilibriumProblem, i: number, lambda: Float64Array): number {
+  const nE = p.elements.length;
+  let t = -p.species[i].g;
+  for (let j = 0; j < nE; j++) t += p.stoich[i * nE + j] * lambda[j];
+  return t;
+}
+
+export type NewtonOutcome = {
+  converged: boolean;
+  iterations: number;
+  /** Largest relative element-balance residual. */
+  balanceResidual: number;
+  /** Largest phase-condition residual (RT units). */
+  conditionResidual: number;
+  singular: boolean;
+  /** An element with a non-zero total carried by no present phase. */
+  unsupportedElement?: number;
+};
+
+type Assembly = {
+  matrix: Float64Array;
+  rhs: Float64Array;
+  size: number;
+  activeList: number[];
+  lnICol: number;
+  balanceResidual: number;
+  conditionResidual: number;
+  unsupportedElement?: number;
+  aq?: AqueousEvaluation;
+};
+
+/** Builds the Newton system J·Δ = −F for the present phases. */
+export function assemble(p: EquilibriumProblem, s: SolverState): Assembly {
+  const nE = p.elements.length;
+  const st = p.stoich;
+  const activeList: number[] = [];
+  p.phases.forEach((_, k) => {
+    if (s.active[k]) activeList.push(k);
+  });
+  const aqueousActive = p.aqueous >= 0 && s.active[p.aqueous] === 1;
+  const lnICol = aqueousActive ? nE : -1;
+  const base = nE + (aqueousActive ? 1 : 0);
+  const size = base + activeList.length;
+  const matrix = new Float64Array(size * size);
+  const rhs = new Float64Array(size);
+  const F = new Float64Array(nE);
+  const scale = new Float64Array(nE);
+  const J = (r: number, c: number, v: number) => {
+    matrix[r * size + c] += v;
+  };
+  let conditionResidual = 0;
+  let aq: AqueousEvaluation | undefined;
+
+  activeList.forEach((phase, k) => {
+    const col = base + k;
+    const row = base + k;
+    const kind = p.phases[phase].kind;
+    const amount = s.amount[phase];
+    if (kind === "aqueous") {
+      aq = evaluateAqueous(p, s.lambda, s.lnIonicStrength);
+      const I = aq.ionicStrength;
+      let halfZ2m = 0;
+      const dHalfZ2mDLambda = new Float64Array(nE);
+      let halfZ2mGammaI = 0;
+      const dMtDLambda = new Float64Array(nE);
+      const dMcDLambda = new Float64Array(nE);
+      let dMtDLnI = 0;
+      let dMcDLnI = 0;
+      for (const i of p.phases[phase].species) {
+        if (i === p.water) {
+          for (let j = 0; j < nE; j++) {
+            const a = st[i * nE + j];
+            if (a === 0) continue;
+            F[j] += (a * amount) / WATER_MOLAR_MASS_KG_PER_MOL;
+            scale[j] += Math.abs(a * amount) / WATER_MOLAR_MASS_KG_PER_MOL;
+            J(j, col, a / WATER_MOLAR_MASS_KG_PER_MOL);
+          }
+          continue;
+        }
+        const m = aq.molality[i];
+        const z = p.species[i].charge;
+        const gI = aq.dLnGammaDI[i] * I; // d ln γ / d ln I
+        halfZ2m += 0.5 * z * z * m;
+        halfZ2mGammaI += 0.5 * z * z * m * gI;
+        dMtDLnI -= m * gI;
+        if (z !== 0) dMcDLnI -= m * gI;
+        for (let j = 0; j < nE; j++) {
+          const a = st[i * nE + j];
+          if (a === 0) continue;
+          F[j] += a * amount * m;
+          scale[j] += Math.abs(a * amount * m);
+          J(j, col, a * m);
+          J(j, lnICol, -a * amount * m * gI);
+          for (let l = 0; l < nE; l++) {
+            const b = st[i * nE + l];
+            if (b !== 0) J(j, l, amount * a * b * m);
+          }
+        }
+        for (let l = 0; l < nE; l++) {
+          const b = st[i * nE + l];
+          if (b === 0) continue;
+          dHalfZ2mDLambda[l] += 0.5 * z * z * m * b;
+          dMtDLambda[l] += m * b;
+          if (z !== 0) dMcDLambda[l] += m * b;
+        }
+      }
+      // Ionic-strength row.
+      const lnIRow = nE;
+      const gResidual = s.lnIonicStrength - Math.log(Math.max(halfZ2m, 1e-300));
+      rhs[lnIRow] = -gResidual;
+      conditionResidual = Math.max(conditionResidual, Math.abs(gResidual));
+      for (let l = 0; l < nE; l++) J(lnIRow, l, -dHalfZ2mDLambda[l] / halfZ2m);
+      J(lnIRow, lnICol, 1 + halfZ2mGammaI / halfZ2m);
+      // Water condition: a_w·λ − g_w − ln a_w = 0.
+      const [fT, fC, fI] = aq.dLnAw;
+      const c = speciesAffinity(p, p.water, s.lambda) - aq.lnWaterActivity;
+      rhs[row] = -c;
+      conditionResidual = Math.max(conditionResidual, Math.abs(c));
+      for (let l = 0; l < nE; l++) J(row, l, st[p.water * nE + l] - fT * dMtDLambda[l] - fC * dMcDLambda[l]);
+      J(row, lnICol, -(fT * dMtDLnI + fC * dMcDLnI + fI * I));
+    } else if (kind === "solid-solution" || kind === "gas") {
+      const members = p.phases[phase].species;
+      const y = memberTerms(p, phase, s.lambda);
+      let sum = 0;
+      for (const v of y) sum += v;
+      members.forEach((i, q) => {
+        for (let j = 0; j < nE; j++) {
+          const a = st[i * nE + j];
+          if (a === 0) continue;
+          F[j] += a * amount * y[q];
+          scale[j] += Math.abs(a * amount * y[q]);
+          J(j, col, a * y[q]);
+          for (let l = 0; l < nE; l++) {
+            const b = st[i * nE + l];
+            if (b !== 0) J(j, l, amount * a * b * y[q]);
+          }
+        }
+        for (let l = 0; l < nE; l++) J(row, l, (y[q] * st[i * nE + l]) / sum);
+      });
+      const c = Math.log(sum);
+      rhs[row] = -c;
+      conditionResidual = Math.max(conditionResidual, Math.abs(c));
+    } else {
+      const i = p.phases[phase].species[0];
+      for (let j = 0; j < nE; j++) {
+        const a = st[i * nE + j];
+        if (a === 0) continue;
+        F[j] += a * amount;
+        scale[j] += Math.abs(a * amount);
+        J(j, col, a);
+        J(row, j, a);
+      }
+      const c = speciesAffinity(p, i, s.lambda);
+      rhs[row] = -c;
+      conditionResidual = Math.max(conditionResidual, Math.abs(c));
+    }
+  });
+
+  let balanceResidual = 0;
+  let unsupportedElement: number | undefined;
+  for (let j = 0; j < nE; j++) {
+    let rowEmpty = true;
+    for (let c = 0; c < size; c++) if (matrix[j * size + c] !== 0) rowEmpty = false;
+    if (rowEmpty) {
+      // No present phase carries this element: freeze its potential. Fine for the charge when no
+      // ions are present, or an element with zero total; otherwise the phase set cannot hold it.
+      matrix[j * size + j] = 1;
+      rhs[j] = 0;
+      if (j !== p.chargeRow && p.totals[j] > 0) unsupportedElement = j;
+      continue;
+    }
+    const residual = F[j] - p.totals[j];
+    rhs[j] = -residual;
+    const denominator = Math.max(p.totals[j], scale[j], 1e-300);
+    balanceResidual = Math.max(balanceResidual, Math.abs(residual) / denominator);
+  }
+  return { matrix, rhs, size, activeList, lnICol, balanceResidual, conditionResidual, unsupportedElement, aq };
+}
+
+export type NewtonOptions = { maxIterations: number; balanceTolerance: number; conditionTolerance: number; deadline: number };
+
+/** Newton iterations for a fixed set of present phases. Mutates `s`. */
+export function solveFixedPhases(p: EquilibriumProblem, s: SolverState, o: NewtonOptions): NewtonOutcome {
+  const nE = p.elements.length;
+  let last: Assembly | undefined;
+  for (let iteration = 0; iteration <= o.maxIterations; iteration++) {
+    const a = assemble(p, s);
+    last = a;
+    if (a.unsupportedElement !== undefined)
+      return { converged: false, iterations: iteration, balanceResidual: a.balanceResidual, conditionResidual: a.conditionResidual, singular: false, unsupportedElement: a.unsupportedElement };
+    if (a.balanceResidual <= o.balanceTolerance && a.conditionResidual <= o.conditionTolerance)
+      return { converged: true, iterations: iteration, balanceResidual: a.balanceResidual, conditionResidual: a.conditionResidual, singular: false };
+    if (iteration === o.maxIterations || performance.now() > o.deadline) break;
+    let delta = a.rhs.slice();
+    if (!solveInPlace(a.matrix.slice(), delta, a.size)) {
+      // Element potentials not fixed by the present phases (a dry solid assemblage with fewer phases than
+      // elements leaves directions of λ free): regularise the λ block (Tikhonov) for a near least-norm step.
+      delta = a.rhs.slice();
+      const m = a.matrix;
+      for (let j = 0; j < nE; j++) {
+        let rowMax = 0;
+        for (let c = 0; c < a.size; c++) rowMax = Math.max(rowMax, Math.abs(m[j * a.size + c]));
+        m[j * a.size + j] += 1e-9 * rowMax;
+      }
+      if (!solveInPlace(m, delta, a.size))
+        return { converged: false, iterations: iteration, balanceResidual: a.balanceResidual, conditionResidual: a.conditionResidual, singular: true };
+    }
+    const alpha = stepLength(p, s, delta, a);
+    for (let j = 0; j < nE; j++) s.lambda[j] += alpha * delta[j];
+    if (a.lnICol >= 0) s.lnIonicStrength += alpha * delta[a.lnICol];
+    const base = nE + (a.lnICol >= 0 ? 1 : 0);
+    a.activeList.forEach((phase, k) => {
+      s.amount[phase] += alpha * delta[base + k];
+    });
+  }
+  return { converged: false, iterations: o.maxIterations, balanceResidual: last?.balanceResidual ?? Infinity, conditionResidual: last?.conditionResidual ?? Infinity, singular: false };
+}
+
+/** Largest change of ln(amount) allowed per step for abundant species, and for any species. */
+const MAX_LN_STEP_MAJOR = 3;
+const MAX_LN_STEP_ANY = 40;
+
+/**
+ * Damping in the spirit of the Gordon–McBride control factor: the step is shortened so that no abundant
+ * species changes by more than e³ and no species at all by more than e⁴⁰ per iteration.
+ */
+function stepLength(p: EquilibriumProblem, s: SolverState, delta: Float64Array, a: Assembly): number {
+  const nE = p.elements.length;
+  let major = 0;
+  let any = 0;
+  const dLnI = a.lnICol >= 0 ? delta[a.lnICol] : 0;
+  for (const phase of a.activeList) {
+    const kind = p.phases[phase].kind;
+    if (kind === "pure-solid" || kind === "reservoir") continue;
+    const y = kind === "aqueous" ? undefined : memberTerms(p, phase, s.lambda);
+    p.phases[phase].species.forEach((i, q) => {
+      let change = 0;
+      for (let j = 0; j < nE; j++) change += p.stoich[i * nE + j] * delta[j];
+      let abundance: number;
+      if (kind === "aqueous") {
+        if (i === p.water) abundance = 1;
+        else {
+          change -= a.aq!.dLnGammaDI[i] * a.aq!.ionicStrength * dLnI;
+          abundance = a.aq!.molality[i] * WATER_MOLAR_MASS_KG_PER_MOL;
+        }
+      } else abundance = y![q];
+      const magnitude = Math.abs(change);
+      if (abundance > 1e-10 && magnitude > major) major = magnitude;
+      if (magnitude > any) any = magnitude;
+    });
+  }
+  let alpha = 1;
+  if (major > MAX_LN_STEP_MAJOR) alpha = Math.min(alpha, MAX_LN_STEP_MAJOR / major);
+  if (any > MAX_LN_STEP_ANY) alpha = Math.min(alpha, MAX_LN_STEP_ANY / any);
+  if (Math.abs(dLnI) > MAX_LN_STEP_MAJOR) alpha = Math.min(alpha, MAX_LN_STEP_MAJOR / Math.abs(dLnI));
+  return alpha;
+}

@@ -89,7 +89,7 @@ def aqueous():
             "source": "Plummer & Busenberg (1982) Geochim. Cosmochim. Acta 46, 1011, Table 2 (log K(T) of Ca+2 + HCO3- = CaHCO3+); log K(298.15 K), ΔrH° and ΔrCp° least-squares fitted to it at 0-100 °C by lib/data/scripts/derive-carbonate-complex-constants.py",
             "uncertaintyLog10K": 0.05,
             "recalledFromMemory": True,
-            "note": f"Defined by dissociation. Coefficients of the published temperature function recalled. The constant-ΔrCp° form follows the published function within {complexes['CaHCO3+']['fit0to100C']['maxAbsDeviationLog10K']:.3f} log units at 0-100 °C. Not used by the Plummer & Busenberg check of tests/data/carbonate-log-k.test.ts (that check covers only CO2, HCO3-, CO3-2 and calcite).",
+            "note": f"Defined by dissociation. Coefficients of the published temperature function recalled. The constant-ΔrCp° form follows the published function within {complexes['CaHCO3+']['fit0to100C']['maxAbsDeviationLog10K']:.3f} log units at 0-100 °C. Not used by the Plummer & Busenberg check of tests/data/starter/carbonate-log-k.test.ts (that check covers only CO2, HCO3-, CO3-2 and calcite).",
         },
         {
             "id": "CaCO3(aq)", "formula": "CaCO3(aq)", "name": "calcium carbonate ion pair", "phase": "aqueous",

@@ -1,7 +1,7 @@
 import { describe, it, expect } from "vitest";
-import { loadDataset } from "../../lib/data/load-dataset";
-import { speciesAtTemperature } from "../../lib/data/species-at-temperature";
-import { gasConstantJPerMolK } from "../../lib/thermo/physical-constants";
+import { loadDataset } from "../../../lib/data/load-dataset";
+import { speciesAtTemperature } from "../../../lib/data/species-at-temperature";
+import { gasConstantJPerMolK } from "../../../lib/thermo/physical-constants";
 
 /**
  * The carbonate system computed from the starter data (CODATA gases and water, revised-HKF ions of Shock &

@@ -16,7 +16,7 @@ export type FormulaError = {
 export type FormulaResult = { ok: true; value: ParsedFormula } | { ok: false; error: FormulaError };
 
 /** Phase suffixes that say nothing about stoichiometry (common practice in thermodynamic tables). */
-const phaseSuffixPattern = /\((?:aq|g|s|l|cr)\)$/;
+const phaseSuffixPattern = /\((?:aq|g|s|l|cr|am)\)$/;
 /** Trailing charge: `+`, `-`, `+2`, `-2`, `++`, `--` (the sign comes before the number: `Ca+2`, not `Ca2+`). */
 const chargePattern = /(?:([+-])(\d+)|(\++)|(-+))$/;
 /** Hydrate and adduct separators: middle dot, bullet and asterisk. */
@@ -42,7 +42,7 @@ class FormulaSyntaxError extends Error {
  *   number    := digits ("." digits)?    decimal subscripts, e.g. `(CaO)1.5(SiO2)1(H2O)2.5`
  *   sep       := "·" | "•" | "*"
  *   charge    := ("+" | "-") digits | "+"+ | "-"+
- *   phase     := "(aq)" | "(g)" | "(s)" | "(l)" | "(cr)"   ignored for stoichiometry
+ *   phase     := "(aq)" | "(g)" | "(s)" | "(l)" | "(cr)" | "(am)"   ignored for stoichiometry
  *
  * Examples: `CaSO4·2H2O`, `3CaO·Al2O3·6H2O`, `Al(OH)4-`, `SO4-2`, `CO2(aq)`.
  * Cost O(n) in the formula length. Returns a typed error with the failing position; never throws.

@@ -47,6 +47,8 @@ describe("parseFormula", () => {
     expect(parsed("H2O(l)")).toEqual(parsed("H2O"));
     expect(parsed("CaCO3(s)")).toEqual(parsed("CaCO3"));
     expect(parsed("Ca+2(aq)")).toEqual({ elements: { Ca: 1 }, charge: 2 });
+    expect(parsed("SiO2(am)")).toEqual(parsed("SiO2"));
+    expect(parsed("Al(OH)3(cr)")).toEqual(parsed("Al(OH)3"));
   });
 
   it("reports a syntax error with the position of the offending character", () => {

@@ -15,8 +15,15 @@ const files = readdirSync(here)
 const results: Record<string, unknown> = {
   machine: { cpu: cpus()[0]?.model ?? "unknown", cores: cpus().length, node: process.version },
 };
-for (const file of files) {
-  const module = (await import(join(here, file))) as { run: () => Promise<Record<string, unknown>> };
-  results[file.replace(/\.bench\.ts$/, "")] = await module.run();
+async function main(): Promise<void> {
+  for (const file of files) {
+    const module = (await import(join(here, file))) as { run: () => Promise<Record<string, unknown>> };
+    results[file.replace(/\.bench\.ts$/, "")] = await module.run();
+  }
+  process.stdout.write(JSON.stringify(results, null, 2) + "\n");
 }
-process.stdout.write(JSON.stringify(results, null, 2) + "\n");
+
+main().catch((error: unknown) => {
+  process.stderr.write(`benchmark failed: ${error instanceof Error ? error.message : String(error)}\n`);
+  process.exit(1);
+});

@@ -142,6 +142,23 @@ type Assembly = {
   aq?: AqueousEvaluation;
 };
 
+const nonZeroCache = new WeakMap<EquilibriumProblem, Int32Array[]>();
+
+/** Element columns in which species i has a non-zero coefficient (most species have three or four). */
+function nonZero(p: EquilibriumProblem, i: number): Int32Array {
+  let lists = nonZeroCache.get(p);
+  if (!lists) {
+    const nE = p.elements.length;
+    lists = p.species.map((_, k) => {
+      const columns: number[] = [];
+      for (let j = 0; j < nE; j++) if (p.stoich[k * nE + j] !== 0) columns.push(j);
+      return Int32Array.from(columns);
+    });
+    nonZeroCache.set(p, lists);
+  }
+  return lists[i];
+}
+
 /** Builds the Newton system J·Δ = −F for the present phases. */
 export function assemble(p: EquilibriumProblem, s: SolverState): Assembly {
   const nE = p.elements.length;
@@ -197,24 +214,19 @@ export function assemble(p: EquilibriumProblem, s: SolverState): Assembly {
         halfZ2mGammaI += 0.5 * z * z * m * gI;
         dMtDLnI -= m * gI;
         if (z !== 0) dMcDLnI -= m * gI;
-        for (let j = 0; j < nE; j++) {
+        const nz = nonZero(p, i);
+        for (let x = 0; x < nz.length; x++) {
+          const j = nz[x];
           const a = st[i * nE + j];
-          if (a === 0) continue;
           F[j] += a * amount * m;
           scale[j] += Math.abs(a * amount * m);
-          J(j, col, a * m);
-          J(j, lnICol, -a * amount * m * gI);
-          for (let l = 0; l < nE; l++) {
-            const b = st[i * nE + l];
-            if (b !== 0) J(j, l, amount * a * b * m);
-          }
-        }
-        for (let l = 0; l < nE; l++) {
-          const b = st[i * nE + l];
-          if (b === 0) continue;
-          dHalfZ2mDLambda[l] += 0.5 * z * z * m * b;
-          dMtDLambda[l] += m * b;
-          if (z !== 0) dMcDLambda[l] += m * b;
+          matrix[j * size + col] += a * m;
+          matrix[j * size + lnICol] -= a * amount * m * gI;
+          const w = amount * a * m;
+          for (let y = 0; y < nz.length; y++) matrix[j * size + nz[y]] += w * st[i * nE + nz[y]];
+          dHalfZ2mDLambda[j] += 0.5 * z * z * m * a;
+          dMtDLambda[j] += m * a;
+          if (z !== 0) dMcDLambda[j] += m * a;
         }
       }
       // Ionic-strength row.
@@ -237,18 +249,17 @@ export function assemble(p: EquilibriumProblem, s: SolverState): Assembly {
       let sum = 0;
       for (const v of y) sum += v;
       members.forEach((i, q) => {
-        for (let j = 0; j < nE; j++) {
+        const nz = nonZero(p, i);
+        for (let x = 0; x < nz.length; x++) {
+          const j = nz[x];
           const a = st[i * nE + j];
-          if (a === 0) continue;
           F[j] += a * amount * y[q];
           scale[j] += Math.abs(a * amount * y[q]);
-          J(j, col, a * y[q]);
-          for (let l = 0; l < nE; l++) {
-            const b = st[i * nE + l];
-            if (b !== 0) J(j, l, amount * a * b * y[q]);
-          }
+          matrix[j * size + col] += a * y[q];
+          const w = amount * a * y[q];
+          for (let v = 0; v < nz.length; v++) matrix[j * size + nz[v]] += w * st[i * nE + nz[v]];
+          matrix[row * size + j] += (y[q] * a) / sum;
         }
-        for (let l = 0; l < nE; l++) J(row, l, (y[q] * st[i * nE + l]) / sum);
       });
       const c = Math.log(sum);
       rhs[row] = -c;

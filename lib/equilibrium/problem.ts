@@ -5,6 +5,11 @@ import type { EquilibriumOutcome } from "./failure";
 export const GAS_CONSTANT_J_PER_MOL_K = 8.314462618;
 /** Molar mass of water, kg/mol, from IUPAC 2021 standard atomic weights (H 1.008, O 15.999). */
 export const WATER_MOLAR_MASS_KG_PER_MOL = 0.018015;
+/**
+ * Element totals below this fraction of the largest total are treated as absent: 25 orders of magnitude
+ * is beyond any analytical meaning and keeps every species amount inside double precision.
+ */
+export const TRACE_CUTOFF_RELATIVE = 1e-25;
 /** Name of the pseudo-element that carries the charge balance. */
 export const CHARGE_ELEMENT = "charge";
 
@@ -82,10 +87,14 @@ export function buildProblem(input: ProblemInput): EquilibriumOutcome<Equilibriu
   const waterVapourFixed = input.species.some((s) => s.id in fixed && s.phase === "gas" && s.charge === 0 && s.elements.H === 2 && s.elements.O === 1 && Object.keys(s.elements).length === 2);
 
   const available = new Set<string>();
+  let largestTotal = 0;
   for (const [element, amount] of Object.entries(input.elementTotalsMol)) {
     if (!(amount >= 0) || !Number.isFinite(amount))
       return { ok: false, error: { code: "invalid_input", field: `elements.${element}`, message: "amount must be a finite number ≥ 0 mol" } };
-    if (amount > 0) available.add(element);
+    largestTotal = Math.max(largestTotal, amount);
+  }
+  for (const [element, amount] of Object.entries(input.elementTotalsMol)) {
+    if (amount > TRACE_CUTOFF_RELATIVE * largestTotal) available.add(element);
   }
   for (const gasId of Object.keys(fixed)) for (const e of Object.keys(byId.get(gasId)!.elements)) available.add(e);
 
@@ -105,7 +114,7 @@ export function buildProblem(input: ProblemInput): EquilibriumOutcome<Equilibriu
   const nE = elements.length;
   const totals = new Float64Array(nE);
   elements.forEach((e, j) => {
-    if (j !== chargeRow) totals[j] = input.elementTotalsMol[e] ?? 0;
+    if (j !== chargeRow && available.has(e)) totals[j] = input.elementTotalsMol[e] ?? 0;
   });
 
   const suppressed = new Set(input.suppressedPhases ?? []);

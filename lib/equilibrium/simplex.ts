@@ -42,22 +42,27 @@ export function solveLinearProgram(
       if (i === row) continue;
       const f = t[i * width + col];
       if (f === 0) continue;
-      for (let j = 0; j < width; j++) t[i * width + j] -= f * t[row * width + j];
+      for (let j = 0; j < width; j++) {
+        const v = t[row * width + j];
+        if (v !== 0) t[i * width + j] -= f * v;
+      }
       t[i * width + col] = 0;
     }
     basis[row] = col;
   };
 
   // Runs the simplex for a cost vector over the first `allowed` columns; returns false on the limit.
-  const optimise = (cost: (j: number) => number, allowed: number): boolean => {
+  const costBasis = new Float64Array(m);
+  const optimise = (cost: Float64Array, allowed: number): boolean => {
     for (;;) {
       if (++iterations > maxIterations) return false;
+      for (let i = 0; i < m; i++) costBasis[i] = cost[basis[i]];
       // Reduced costs r_j = c_j − c_B·column_j; Bland: first improving column enters.
       let entering = -1;
       for (let j = 0; j < allowed; j++) {
-        let r = cost(j);
-        for (let i = 0; i < m; i++) r -= cost(basis[i]) * t[i * width + j];
-        if (r < -eps * (1 + Math.abs(cost(j)))) {
+        let r = cost[j];
+        for (let i = 0; i < m; i++) r -= costBasis[i] * t[i * width + j];
+        if (r < -eps * (1 + Math.abs(cost[j]))) {
           entering = j;
           break;
         }
@@ -80,7 +85,11 @@ export function solveLinearProgram(
     }
   };
 
-  if (!optimise((j) => (j >= n && j < n + m ? 1 : 0), n + m)) return { status: "iteration_limit", iterations };
+  const phaseOneCost = new Float64Array(n + m);
+  for (let j = n; j < n + m; j++) phaseOneCost[j] = 1;
+  const phaseTwoCost = new Float64Array(n + m);
+  phaseTwoCost.set(c);
+  if (!optimise(phaseOneCost, n + m)) return { status: "iteration_limit", iterations };
   let infeasibility = 0;
   for (let i = 0; i < m; i++) if (basis[i] >= n) infeasibility += t[i * width + width - 1];
   if (infeasibility > 1e-9 * bScale) return { status: "infeasible", infeasibility };
@@ -94,7 +103,7 @@ export function solveLinearProgram(
       }
     }
   }
-  if (!optimise((j) => (j < n ? c[j] : 0), n)) return { status: "iteration_limit", iterations };
+  if (!optimise(phaseTwoCost, n)) return { status: "iteration_limit", iterations };
 
   const x = new Float64Array(n);
   for (let i = 0; i < m; i++) if (basis[i] < n) x[basis[i]] = Math.max(0, t[i * width + width - 1]);

@@ -73,3 +73,9 @@ export function classifyRobustness(
   if (fraction <= thresholds.robustSilentAtMost) return "robust-silent";
   return "uncertain";
 }
+
+/** The robustness record of a flag (lib/advisory/flag.ts) from whether it fired in each sample. */
+export function flagRobustness(fired: readonly boolean[]): { firedFraction: number; samples: number; reading: RobustnessClass } {
+  const fraction = firedFraction(fired);
+  return { firedFraction: fraction, samples: fired.length, reading: classifyRobustness(fraction) };
+}

@@ -1,6 +1,6 @@
 import { describe, it, expect } from "vitest";
 import { execFileSync } from "node:child_process";
-import { classifyRobustness, firedFraction, quantileOfSorted, summarise } from "../../lib/advisory/sample-statistics";
+import { classifyRobustness, firedFraction, flagRobustness, quantileOfSorted, summarise } from "../../lib/advisory/sample-statistics";
 import { createRng } from "../../lib/advisory/random";
 
 describe("sample statistics", () => {
@@ -35,6 +35,11 @@ describe("sample statistics", () => {
     expect(classifyRobustness(0.11)).toBe("uncertain");
     expect(classifyRobustness(0.1)).toBe("robust-silent");
     expect(() => classifyRobustness(1.2)).toThrow(/0–1/);
+  });
+
+  it("build a flag's robustness record from the samples in which it fired", () => {
+    const fired = Array.from({ length: 200 }, (_, i) => i % 20 !== 0); // fires in 190 of 200
+    expect(flagRobustness(fired)).toEqual({ firedFraction: 0.95, samples: 200, reading: "robust-fires" });
   });
 
   it("refuse empty or non-finite samples", () => {

@@ -40,8 +40,10 @@ const rotl = (x: number, k: number): number => ((x << k) | (x >>> (32 - k))) >>>
 export function createRng(seed: number, stream = 0): Rng {
   if (!Number.isSafeInteger(seed)) throw new RangeError(`seed must be a safe integer, got ${seed}`);
   if (!Number.isSafeInteger(stream) || stream < 0) throw new RangeError(`stream must be a non-negative safe integer, got ${stream}`);
-  // Combine seed and stream into the SplitMix64 starting state (seed in the high half, stream mixed in).
-  let sm = ((BigInt.asUintN(64, BigInt(seed)) << 21n) ^ BigInt(stream) ^ (BigInt(stream) << 43n)) & MASK64;
+  // SplitMix64 starting state: the seed hashed once, then offset by stream × a second odd constant, so that
+  // every (seed, stream) pair starts from its own state.
+  const [seedHash] = splitMix64(BigInt.asUintN(64, BigInt(seed)));
+  let sm = (seedHash + BigInt(stream) * 0xd1b54a32d192ed03n) & MASK64;
   const words: number[] = [];
   for (let i = 0; i < 2; i++) {
     const [out, next] = splitMix64(sm);

@@ -27,6 +27,16 @@ describe("the seeded generator", () => {
     expect(draw(42, 0)).not.toEqual(draw(42, 1));
   });
 
+  it("starts every (seed, stream) pair of a 50 × 50 grid from a different point", () => {
+    const starts = new Set<string>();
+    for (let seed = 0; seed < 50; seed++)
+      for (let stream = 0; stream < 50; stream++) {
+        const rng = createRng(seed, stream);
+        starts.add(`${rng.nextUint32()}:${rng.nextUint32()}`);
+      }
+    expect(starts.size).toBe(2500);
+  });
+
   it("draws uniform numbers in [0, 1) that pass SciPy's Kolmogorov–Smirnov test against U(0,1)", () => {
     const rng = createRng(2026);
     const u = Array.from({ length: 5000 }, () => rng.uniform());

@@ -160,6 +160,7 @@ const inputDefaultsSchema = z.object({
   sinePeakHourOfDay: sourced,
   curingClass: sourced,
   cementClass: z.object({ value: z.enum(["R", "N", "S"]), source: z.string() }),
+  maxTimeSteps: sourced,
 });
 
 export type StrengthDevelopmentId = z.infer<typeof developmentId>;

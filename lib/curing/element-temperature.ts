@@ -1,6 +1,7 @@
 import { arrheniusAgeFactor } from "./arrhenius-rate";
 import type { HeatSource } from "./heat-source";
 import { solveTridiagonal } from "./tridiagonal";
+import { curingInputDefaults } from "./curing-data";
 
 /** One face of the element: its environment temperature and overall surface coefficient over time. */
 export type FaceBoundary = {
@@ -57,8 +58,8 @@ export type ElementThermalResult = {
   steps: number;
 };
 
-/** Upper bound on time steps, so a run always ends (about a second of work at 400 nodes). */
-export const maxElementSteps = 200_000;
+/** Upper bound on time steps, so a run always ends (data file: input defaults). */
+export const maxElementSteps = curingInputDefaults.maxTimeSteps.value;
 const secondsPerHour = 3600;
 const startupBackwardEulerSteps = 2; // Rannacher (1984) start-up: damps Crank–Nicolson oscillation after the placement jump
 

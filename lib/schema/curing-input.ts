@@ -1,7 +1,10 @@
 import { z } from "zod";
-import { surfaceCoverIds } from "../curing/surface-heat-transfer";
-import { maxElementSteps } from "../curing/element-temperature";
-import { curingInputDefaults } from "../curing/curing-data";
+import surfaceCovers from "../data/curing/surface-covers.json";
+import curingInputDefaults from "../data/curing/input-defaults.json";
+
+// Only data files are imported here, so the schema does not depend on the curing modules that use it.
+const surfaceCoverIds = surfaceCovers.covers.map((cover) => cover.id);
+const maxElementSteps = curingInputDefaults.maxTimeSteps.value;
 
 /**
  * Input of the curing advisory (`cure` command, API, form). Every message names the field and its limit.
@@ -228,7 +231,8 @@ export const curingInputSchema = z
       context.addIssue({ code: "custom", path: ["faces", "b"], message: "faces.b is required when element.geometry is two-faces" });
     const durationH = input.durationH ?? curingInputDefaults.durationH.value;
     const stepMin = input.timeStepMin ?? curingInputDefaults.timeStepMin.value;
-    if ((durationH * 60) / stepMin > maxElementSteps)
+    const minutesPerHour = 60;
+    if ((durationH * minutesPerHour) / stepMin > maxElementSteps)
       context.addIssue({ code: "custom", path: ["timeStepMin"], message: `durationH / timeStepMin must give at most ${maxElementSteps} steps` });
     if (input.concrete.fckMPa !== undefined && input.concrete.fckMPa >= input.concrete.fcm28MPa)
       context.addIssue({ code: "custom", path: ["concrete", "fckMPa"], message: "concrete.fckMPa must be below concrete.fcm28MPa" });

@@ -137,8 +137,19 @@ function meanClinkerDegree(phasesG: Partial<Record<ClinkerPhaseId, number>>, deg
   return mass > 0 ? reacted / mass : 0;
 }
 
+/** The partition depends only on the analysis object; a timeline reuses it for every age. */
+const partitionCache = new WeakMap<OxideAnalysisMassPercent, ReturnType<typeof partitionCementOxides>>();
+function cachedPartition(oxides: OxideAnalysisMassPercent) {
+  let partition = partitionCache.get(oxides);
+  if (!partition) {
+    partition = partitionCementOxides(oxides);
+    partitionCache.set(oxides, partition);
+  }
+  return partition;
+}
+
 function addCementFromOxides(acc: Accumulator, oxides: OxideAnalysisMassPercent, cementMassG: number, degrees: ReactionDegrees, warnings: BulkCompositionWarning[]): ClinkerPartitionError | undefined {
-  const partition = partitionCementOxides(oxides);
+  const partition = cachedPartition(oxides);
   if (!partition.ok) return partition.error;
   const p = partition.value;
   const scale = cementMassG / 100;

@@ -77,8 +77,13 @@ export function parrotKillohRatePerDay(c: ParrotKillohPhaseConstants, degree: nu
 
 function rateWithFactor(c: ParrotKillohPhaseConstants, degree: number, waterCementRatio: number, factor: number): number {
   if (degree >= maxDegree) return 0;
-  const rates = parrotKillohStageRates(c, degree);
-  const controlling = Math.min(rates.nucleationGrowth, rates.diffusion, rates.shell);
+  // Same equations as parrotKillohStageRates, inlined without allocation (the integrator calls this ~4000 times).
+  const remaining = 1 - degree;
+  const cubeRoot = Math.cbrt(remaining);
+  const nucleationGrowth = (c.K1PerDay / c.N1) * remaining * Math.pow(-Math.log(remaining), 1 - c.N1);
+  const diffusion = (c.K2PerDay * cubeRoot * cubeRoot) / (1 - cubeRoot);
+  const shell = c.K3PerDay * Math.pow(remaining, c.N3);
+  const controlling = Math.min(nucleationGrowth, diffusion, shell);
   return controlling * waterCementFactor(c, degree, waterCementRatio) * factor;
 }
 

@@ -84,6 +84,7 @@ export function resolveBinder(input: BinderInput): ResolveBinderResult {
     return { type: scm.type, massPercentOfBinder: scm.massPercentOfBinder, oxidesMassPercent: scm.composition.oxidesMassPercent, reactiveFraction: scm.reactiveFraction ?? 1 };
   });
   const totalScm = supplementaryMaterials.reduce((sum, scm) => sum + scm.massPercentOfBinder, 0);
+  // 95 %: the upper limit of slag in EN 197-1 CEM III/C and ASTM C595 type IS, the same limit as the schema.
   if (totalScm > 95) return { ok: false, error: { code: "scm_total_exceeds_limit", totalMassPercent: totalScm, maxMassPercent: 95 } };
   return {
     ok: true,

@@ -6,7 +6,9 @@ import scmPresets from "../data/binders/scm-presets.json";
  * The one input schema for a binder, its mix and its age: shared by the form, the API and the CLI.
  * Every message names the field and its limit. Limits are those of the models behind the fields
  * (w/b and binder content: the ranges of ordinary structural concrete, common practice; age: 1 h to
- * 10 years, the range of the reaction-degree models; curing temperature 0–100 °C, liquid water).
+ * 10 years, the range of the reaction-degree models; curing temperature 0–100 °C, liquid water; Blaine
+ * fineness 200–800 m²/kg around the 250–600 m²/kg of commercial cements, common practice; SCMs up to 95 % of
+ * the binder, the upper limit of EN 197-1 CEM III/C and ASTM C595 type IS).
  */
 
 const cementPresetIds = cementPresets.presets.map((preset) => preset.id);

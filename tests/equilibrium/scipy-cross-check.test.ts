@@ -30,7 +30,9 @@
  * Why the dual and not the primal: posed naively on the raw mole numbers (55 mol of water beside 1e-15 mol
  * of CO2(aq), ln n singular at the bound n = 0, an objective near −5000 whose trace-species terms lie below
  * any absolute tolerance), SLSQP and trust-constr report success at badly wrong equilibria for
- * portlandite–calcite–water. The dual has one unknown per element, all of order 10–10², no bounds and no
+ * portlandite–calcite–water (tried with SciPy 1.10 from 1e-3 mol of every solute: SLSQP stopped 0.021 RT
+ * above the minimum with 0.091 instead of 0.086 mol portlandite and Kw violated by 10^4.6; trust-constr
+ * reached G/RT but left H+ at 5.6e-11 instead of 4.2e-13 mol/kg). The dual has one unknown per element, all of order 10–10², no bounds and no
  * logarithm of an amount; trace species enter only through exp(a_i·λ − g_i), and the objective is linear.
  *
  * What the dual does not cure, found while writing this check: along exchange directions that keep every

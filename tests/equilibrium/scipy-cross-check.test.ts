@@ -31,7 +31,7 @@
  * of CO2(aq), ln n singular at the bound n = 0, an objective near −5000 whose trace-species terms lie below
  * any absolute tolerance), SLSQP and trust-constr report success at badly wrong equilibria for
  * portlandite–calcite–water (tried with SciPy 1.10 from 1e-3 mol of every solute: SLSQP stopped 0.021 RT
- * above the minimum with 0.091 instead of 0.086 mol portlandite and Kw violated by 10^4.6; trust-constr
+ * above the minimum with 0.091 instead of 0.086 mol portlandite and the ion product of water 10^5 times Kw; trust-constr
  * reached G/RT but left H+ at 5.6e-11 instead of 4.2e-13 mol/kg). The dual has one unknown per element, all of order 10–10², no bounds and no
  * logarithm of an amount; trace species enter only through exp(a_i·λ − g_i), and the objective is linear.
  *

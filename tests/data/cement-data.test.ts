@@ -144,6 +144,13 @@ describe("solubility products at 25 °C from the formation data against independ
   });
 });
 
+describe("aqueous silica speciation at 25 °C against an independent measurement", () => {
+  it("gives pK1 of monosilicic acid, SiO2(aq) + 2 H2O = SiO(OH)3- + H+, within 0.15 of 9.82 (Busey & Mesmer 1977, Inorg. Chem. 16, 2444; from memory)", () => {
+    const log10K = reactionLog10K(at25, "SiO2(aq)", { "SiO(OH)3-": 1, "H+": 1, "H2O(l)": -2 }, 298.15);
+    expect(log10K.ok && Math.abs(-log10K.value - 9.82)).toBeLessThan(0.15);
+  });
+});
+
 describe("transcription: log K at 25 °C from the formation data equals the source paper's own log K within 0.3 (same paper — guards typing only)", () => {
   // [id, the source's log K, silica basis] — reactions as written by dissolutionReaction (cement basis, SiO(OH)3- unless stated)
   const sameSource: [string, number, "SiO(OH)3-" | "SiO2(aq)", string][] = [

@@ -142,21 +142,8 @@ type Assembly = {
   aq?: AqueousEvaluation;
 };
 
-const nonZeroCache = new WeakMap<EquilibriumProblem, Int32Array[]>();
-
-/** Element columns in which species i has a non-zero coefficient (most species have three or four). */
 function nonZero(p: EquilibriumProblem, i: number): Int32Array {
-  let lists = nonZeroCache.get(p);
-  if (!lists) {
-    const nE = p.elements.length;
-    lists = p.species.map((_, k) => {
-      const columns: number[] = [];
-      for (let j = 0; j < nE; j++) if (p.stoich[k * nE + j] !== 0) columns.push(j);
-      return Int32Array.from(columns);
-    });
-    nonZeroCache.set(p, lists);
-  }
-  return lists[i];
+  return p.nonZero[i];
 }
 
 /** Builds the Newton system J·Δ = −F for the present phases. */

@@ -47,6 +47,8 @@ export type EquilibriumProblem = {
   water: number;
   /** Species index of H+, for pH. */
   hydron: number;
+  /** Per species, the element columns with a non-zero coefficient (most species have three or four). */
+  nonZero: Int32Array[];
   activity: AqueousActivityModel;
 };
 
@@ -98,6 +100,75 @@ export function buildProblem(input: ProblemInput): EquilibriumOutcome<Equilibriu
   }
   for (const gasId of Object.keys(fixed)) for (const e of Object.keys(byId.get(gasId)!.elements)) available.add(e);
 
+  const suppressedList = [...(input.suppressedPhases ?? [])].sort();
+  const key = [
+    input.temperatureK,
+    [...available].sort().join(","),
+    Object.entries(fixed).sort().map(([k, v]) => `${k}=${v}`).join(","),
+    suppressedList.join(","),
+    input.totalPressureBar ?? 1,
+  ].join("|");
+  let templates = templateCache.get(input.species);
+  if (!templates) {
+    templates = new Map();
+    templateCache.set(input.species, templates);
+  }
+  let template = templates.get(key);
+  if (!template) {
+    const built = buildTemplate(input, available, fixed, waterVapourFixed);
+    if (!built.ok) return built;
+    template = built.value;
+    if (templates.size > 256) templates.clear();
+    templates.set(key, template);
+  }
+  // Totals of the full element list, then the check that dropped (dependent) columns are obeyed.
+  const fullTotals = template.fullElements.map((e, j) => (j === template!.fullChargeRow || !available.has(e) ? 0 : (input.elementTotalsMol[e] ?? 0)));
+  for (const { column, coefficients } of template.dependent) {
+    let implied = 0;
+    let scale = Math.abs(fullTotals[column]);
+    template.keep.forEach((q) => {
+      implied -= coefficients[q] * fullTotals[q];
+      scale = Math.max(scale, Math.abs(coefficients[q] * fullTotals[q]));
+    });
+    if (Math.abs(fullTotals[column] - implied) > 1e-9 * Math.max(scale, 1e-12)) {
+      const element = template.fullElements[column];
+      return {
+        ok: false,
+        error: {
+          code: "infeasible_composition",
+          element,
+          message:
+            element === CHARGE_ELEMENT
+              ? `the components are not electroneutral (net charge ${implied.toExponential(3)} mol of the oxidation-state balance)`
+              : `the total of ${element} is inconsistent with the species that carry it`,
+        },
+      };
+    }
+  }
+  return {
+    ok: true,
+    value: { ...template.problem, totals: Float64Array.from(template.keep, (j) => fullTotals[j]), activity: input.activity },
+  };
+}
+
+type ProblemTemplate = {
+  problem: Omit<EquilibriumProblem, "totals" | "activity">;
+  fullElements: string[];
+  fullChargeRow: number;
+  keep: number[];
+  dependent: { column: number; coefficients: Float64Array }[];
+};
+
+/** Structural part of a problem (species, phases, reduced stoichiometry), reused while only totals change. */
+const templateCache = new WeakMap<readonly SpeciesAtTemperature[], Map<string, ProblemTemplate>>();
+
+function buildTemplate(
+  input: ProblemInput,
+  available: Set<string>,
+  fixed: Record<string, number>,
+  waterVapourFixed: boolean,
+): EquilibriumOutcome<ProblemTemplate> {
+  const rt = GAS_CONSTANT_J_PER_MOL_K * input.temperatureK;
   const kept = input.species.filter(
     (s) => Object.keys(s.elements).every((e) => available.has(e)) && !(waterVapourFixed && s.phase === "aqueous"),
   );
@@ -112,10 +183,6 @@ export function buildProblem(input: ProblemInput): EquilibriumOutcome<Equilibriu
   if (hasCharge) elements.push(CHARGE_ELEMENT);
   const chargeRow = hasCharge ? elements.length - 1 : -1;
   const nE = elements.length;
-  const totals = new Float64Array(nE);
-  elements.forEach((e, j) => {
-    if (j !== chargeRow && available.has(e)) totals[j] = input.elementTotalsMol[e] ?? 0;
-  });
 
   const suppressed = new Set(input.suppressedPhases ?? []);
   const phases: ProblemPhase[] = [];
@@ -148,56 +215,72 @@ export function buildProblem(input: ProblemInput): EquilibriumOutcome<Equilibriu
     else phase = phaseFor(s.id, "pure-solid");
     phases[phase].species.push(i);
     species.push({ id: s.id, phase, charge: s.charge, g, molarMassGPerMol: s.molarMassGPerMol, molarVolumeCm3PerMol: s.molarVolumeCm3PerMol });
-    elements.forEach((e, j) => {
-      stoich[i * nE + j] = j === chargeRow ? s.charge : (s.elements[e] ?? 0);
-    });
+    for (let j = 0; j < nE; j++) stoich[i * nE + j] = j === chargeRow ? s.charge : (s.elements[elements[j]] ?? 0);
     if (isWater(s)) water = i;
     if (isHydron(s)) hydron = i;
   });
-  const reduced = dropDependentElements(elements, stoich, totals, kept.length);
-  if (!reduced.ok) return reduced;
   const aqueous = phaseIndex.get("aqueous") ?? -1;
   if (aqueous >= 0 && water < 0)
     return { ok: false, error: { code: "infeasible_composition", element: "H", message: "aqueous species present but no H2O solvent species" } };
+  const { keep, dependent } = independentElementColumns(stoich, nE, kept.length);
+  const kE = keep.length;
+  const reducedStoich = new Float64Array(kept.length * kE);
+  for (let i = 0; i < kept.length; i++) keep.forEach((j, k) => (reducedStoich[i * kE + k] = stoich[i * nE + j]));
+  const reducedElements = keep.map((j) => elements[j]);
+  const nonZero = species.map((_, i) => {
+    const columns: number[] = [];
+    for (let k = 0; k < kE; k++) if (reducedStoich[i * kE + k] !== 0) columns.push(k);
+    return Int32Array.from(columns);
+  });
   return {
     ok: true,
     value: {
-      temperatureK: input.temperatureK,
-      elements: reduced.value.elements,
-      chargeRow: reduced.value.elements.indexOf(CHARGE_ELEMENT),
-      totals: reduced.value.totals,
-      stoich: reduced.value.stoich,
-      species,
-      phases,
-      aqueous,
-      water,
-      hydron,
-      activity: input.activity,
+      problem: {
+        temperatureK: input.temperatureK,
+        elements: reducedElements,
+        chargeRow: reducedElements.indexOf(CHARGE_ELEMENT),
+        stoich: reducedStoich,
+        nonZero,
+        species,
+        phases,
+        aqueous,
+        water,
+        hydron,
+      },
+      fullElements: elements,
+      fullChargeRow: chargeRow,
+      keep,
+      dependent,
     },
   };
 }
 
 /**
- * Removes element columns that are linear combinations of earlier ones (modified Gram–Schmidt over the
- * species dimension, charge last). Without redox species the charge balance is always such a combination
- * (charge = Σ valence × element), and keeping it would make the Newton matrix singular. The totals must
- * obey the same combination, otherwise the composition is not electroneutral and is rejected.
+ * Element columns that are not linear combinations of earlier ones (modified Gram–Schmidt over the species
+ * dimension, charge last), and for each dropped column its combination of the kept ones. Without redox
+ * species the charge balance is always such a combination (charge = Σ valence × element): keeping it
+ * would make the Newton matrix singular. The totals must obey the same combination (checked per call),
+ * otherwise the composition is not electroneutral.
  */
-function dropDependentElements(
-  elements: string[],
+function independentElementColumns(
   stoich: Float64Array,
-  totals: Float64Array,
+  nE: number,
   nS: number,
-): EquilibriumOutcome<{ elements: string[]; stoich: Float64Array; totals: Float64Array }> {
-  const nE = elements.length;
-  const basis: Float64Array[] = []; // orthonormal columns
-  const basisCoefficients: Float64Array[] = []; // each basis vector in terms of the kept columns
+): { keep: number[]; dependent: { column: number; coefficients: Float64Array }[] } {
+  const basis: Float64Array[] = [];
+  const basisCoefficients: Float64Array[] = [];
   const keep: number[] = [];
+  const dependent: { column: number; coefficients: Float64Array }[] = [];
+  const norm = (v: Float64Array) => {
+    let sum = 0;
+    for (const x of v) sum += x * x;
+    return Math.sqrt(sum);
+  };
   for (let j = 0; j < nE; j++) {
     const v = new Float64Array(nS);
     for (let i = 0; i < nS; i++) v[i] = stoich[i * nE + j];
-    const norm0 = Math.hypot(...v);
-    const coefficients = new Float64Array(nE); // v = column_j − Σ c_k column_keep[k]
+    const norm0 = norm(v);
+    const coefficients = new Float64Array(nE); // v = column_j − Σ c_q column_q
     coefficients[j] = 1;
     for (let k = 0; k < basis.length; k++) {
       let d = 0;
@@ -205,38 +288,17 @@ function dropDependentElements(
       for (let i = 0; i < nS; i++) v[i] -= d * basis[k][i];
       for (let q = 0; q < nE; q++) coefficients[q] -= d * basisCoefficients[k][q];
     }
-    const norm = Math.hypot(...v);
-    if (norm0 === 0 || norm <= 1e-9 * norm0) {
-      // column_j = Σ (−coefficients[q]) column_q over kept q: check the totals obey it.
-      let implied = 0;
-      let scale = Math.abs(totals[j]);
-      for (const q of keep) {
-        implied -= coefficients[q] * totals[q];
-        scale = Math.max(scale, Math.abs(coefficients[q] * totals[q]));
-      }
-      if (Math.abs(totals[j] - implied) > 1e-9 * Math.max(scale, 1e-12))
-        return {
-          ok: false,
-          error: {
-            code: "infeasible_composition",
-            element: elements[j],
-            message:
-              elements[j] === CHARGE_ELEMENT
-                ? `the components are not electroneutral (net charge ${implied.toExponential(3)} mol of the oxidation-state balance)`
-                : `the total of ${elements[j]} is inconsistent with the species that carry it`,
-          },
-        };
+    const remaining = norm(v);
+    if (norm0 === 0 || remaining <= 1e-9 * norm0) {
+      // column_j = Σ_q (−coefficients[q]) column_q over the kept q.
+      dependent.push({ column: j, coefficients });
       continue;
     }
-    for (let i = 0; i < nS; i++) v[i] /= norm;
-    for (let q = 0; q < nE; q++) coefficients[q] /= norm;
+    for (let i = 0; i < nS; i++) v[i] /= remaining;
+    for (let q = 0; q < nE; q++) coefficients[q] /= remaining;
     basis.push(v);
     basisCoefficients.push(coefficients);
     keep.push(j);
   }
-  if (keep.length === nE) return { ok: true, value: { elements, stoich, totals } };
-  const kE = keep.length;
-  const reducedStoich = new Float64Array(nS * kE);
-  for (let i = 0; i < nS; i++) keep.forEach((j, k) => (reducedStoich[i * kE + k] = stoich[i * nE + j]));
-  return { ok: true, value: { elements: keep.map((j) => elements[j]), stoich: reducedStoich, totals: Float64Array.from(keep, (j) => totals[j]) } };
+  return { keep, dependent };
 }

@@ -1,8 +1,8 @@
 import { describe, it, expect } from "vitest";
-import { hydrationTimelineChart } from "../../lib/charts/hydration-timeline";
+import { hydrationTimelineChart, type TimelinePointVolumes } from "../../lib/charts/hydration-timeline";
 
 describe("hydration timeline chart", () => {
-  const points = [
+  const points: TimelinePointVolumes[] = [
     { ageDays: 28, phaseVolumesCm3: { "C-S-H": 22, alite: 2 } },
     { ageDays: 1, phaseVolumesCm3: { "C-S-H": 9, alite: 18 } },
     { ageDays: 0, phaseVolumesCm3: { alite: 30 } },

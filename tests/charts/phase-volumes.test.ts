@@ -1,7 +1,7 @@
 import { describe, it, expect } from "vitest";
-import { phaseVolumesChart } from "../../lib/charts/phase-volumes";
+import { phaseVolumesChart, type AssemblageVolumes } from "../../lib/charts/phase-volumes";
 
-const assemblages = [
+const assemblages: (AssemblageVolumes & { poreSolutionCm3: number; emptyPorosityCm3: number })[] = [
   { label: "28 d", phaseVolumesCm3: { "C-S-H": 20.5, portlandite: 6.1, ettringite: 4.2 }, poreSolutionCm3: 10.2, emptyPorosityCm3: 2.4 },
   { label: "sulfate 3000 mg/L", phaseVolumesCm3: { "C-S-H": 20.1, gypsum: 3.3, ettringite: 7.9, trace: 1e-6 }, poreSolutionCm3: 8.8, emptyPorosityCm3: 2.4 },
 ];

@@ -1,7 +1,7 @@
 import { describe, it, expect } from "vitest";
-import { scenarioSweepChart } from "../../lib/charts/scenario-sweep";
+import { scenarioSweepChart, type ScenarioSweep } from "../../lib/charts/scenario-sweep";
 
-const sweep = {
+const sweep: ScenarioSweep = {
   id: "sulfate",
   title: "External sulfate",
   doseLabel: "Sulfate added",

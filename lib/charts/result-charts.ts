@@ -1,0 +1,146 @@
+import type { ChartData } from "./chart-data";
+import { elementTemperatureChart } from "./element-temperature";
+import { hydrationTimelineChart, type TimelinePointVolumes } from "./hydration-timeline";
+import { phaseVolumesChart, type AssemblageVolumes } from "./phase-volumes";
+import { rhTemperatureMapChart, type RhTemperatureCell } from "./rh-temperature-map";
+import { scenarioSweepChart, type ScenarioSweep, type SweepPoint } from "./scenario-sweep";
+import { strengthMaturityChart, type MaturityPoint, type StrengthPoint } from "./strength-maturity";
+
+/**
+ * The charts of an assessment result, for the results page and the reports (one mapping, so the page, its
+ * data tables, the CSV downloads and the PDF show the same numbers). Results are read defensively: a saved
+ * result may come from an older engine, and a part that is absent gives no chart rather than a guess.
+ *
+ * Where the parts are read (an object at each path, first match wins):
+ * - assemblage: `assemblage` — phases as `phases: [{ id, volumeCm3 }]` or `phaseVolumesCm3: { id: cm³ }`,
+ *   with `poreSolutionCm3` and `emptyPorosityCm3` (all per 100 g binder), `pH`;
+ * - scenarios: `scenarios` — an array, or an object of sweeps, each `{ id, title, doseLabel, doseUnit,
+ *   points: [{ dose, pH, phases | phaseVolumesCm3 }] }`;
+ * - hydration timeline: `timeline` or `hydrationTimeline` — `[{ ageDays, phases | phaseVolumesCm3 }]`;
+ * - element temperature, strength, maturity: `curing` — the curing advice (`temperature`, `strength`,
+ *   `maturity`, `strengthTargets`); the DEF limit from `curing.limits.maxTemperatureC` or 70 °C (Taylor, Famy &
+ *   Scrivener 2001, Cem. Concr. Res. 31, 683);
+ * - RH–temperature map: `rhTemperatureMap` or `humidityTemperatureMap` — `[{ temperatureC, relativeHumidityPercent, state }]`.
+ */
+type Loose = Record<string, unknown>;
+
+const isObject = (v: unknown): v is Loose => v !== null && typeof v === "object" && !Array.isArray(v);
+const isNumber = (v: unknown): v is number => typeof v === "number" && Number.isFinite(v);
+const numberArray = (v: unknown): number[] | undefined => (Array.isArray(v) && v.every((x) => typeof x === "number") ? (v as number[]) : undefined);
+
+/** DEF threshold drawn when the result states none (Taylor, Famy & Scrivener 2001: about 70 °C). */
+const DEF_LIMIT_C = 70;
+
+/** Phase volumes (cm³) from `phaseVolumesCm3: {}` or `phases: [{ id, volumeCm3 }]`. */
+export function phaseVolumesOf(part: unknown): Record<string, number> {
+  if (!isObject(part)) return {};
+  if (isObject(part.phaseVolumesCm3)) {
+    const out: Record<string, number> = {};
+    for (const [id, v] of Object.entries(part.phaseVolumesCm3)) if (isNumber(v)) out[id] = v;
+    return out;
+  }
+  const out: Record<string, number> = {};
+  if (Array.isArray(part.phases))
+    for (const phase of part.phases) if (isObject(phase) && typeof phase.id === "string" && isNumber(phase.volumeCm3)) out[phase.id] = (out[phase.id] ?? 0) + phase.volumeCm3;
+  return out;
+}
+
+function first(result: Loose, keys: string[]): unknown {
+  for (const key of keys) if (result[key] !== undefined && result[key] !== null) return result[key];
+  return undefined;
+}
+
+function assemblageOf(result: Loose): AssemblageVolumes | undefined {
+  const a = result.assemblage;
+  if (!isObject(a)) return undefined;
+  const volumes = phaseVolumesOf(a);
+  if (Object.keys(volumes).length === 0) return undefined;
+  return {
+    label: typeof a.label === "string" ? a.label : "Assemblage",
+    phaseVolumesCm3: volumes,
+    poreSolutionCm3: isNumber(a.poreSolutionCm3) ? a.poreSolutionCm3 : null,
+    emptyPorosityCm3: isNumber(a.emptyPorosityCm3) ? a.emptyPorosityCm3 : null,
+  };
+}
+
+function sweepsOf(result: Loose): ScenarioSweep[] {
+  const raw = result.scenarios;
+  const list = Array.isArray(raw) ? raw : isObject(raw) ? Object.entries(raw).map(([id, v]) => (isObject(v) ? { id, ...v } : v)) : [];
+  const sweeps: ScenarioSweep[] = [];
+  for (const s of list) {
+    if (!isObject(s) || !Array.isArray(s.points)) continue;
+    const points: SweepPoint[] = s.points
+      .filter((p): p is Loose => isObject(p) && isNumber(p.dose))
+      .map((p) => ({ dose: p.dose as number, phaseVolumesCm3: phaseVolumesOf(p), pH: isNumber(p.pH) ? p.pH : null }));
+    if (points.length === 0) continue;
+    const id = typeof s.id === "string" ? s.id : `scenario-${sweeps.length + 1}`;
+    sweeps.push({
+      id,
+      title: typeof s.title === "string" ? s.title : id,
+      doseLabel: typeof s.doseLabel === "string" ? s.doseLabel : "Dose",
+      doseUnit: typeof s.doseUnit === "string" ? s.doseUnit : "",
+      points,
+    });
+  }
+  return sweeps;
+}
+
+function timelineOf(result: Loose): TimelinePointVolumes[] {
+  const raw = first(result, ["timeline", "hydrationTimeline"]);
+  const points = isObject(raw) && Array.isArray(raw.points) ? raw.points : raw;
+  if (!Array.isArray(points)) return [];
+  return points.filter((p): p is Loose => isObject(p) && isNumber(p.ageDays)).map((p) => ({ ageDays: p.ageDays as number, phaseVolumesCm3: phaseVolumesOf(p) }));
+}
+
+function rhMapOf(result: Loose): RhTemperatureCell[] {
+  const raw = first(result, ["rhTemperatureMap", "humidityTemperatureMap"]);
+  const cells = isObject(raw) && Array.isArray(raw.cells) ? raw.cells : raw;
+  if (!Array.isArray(cells)) return [];
+  return cells
+    .filter((c): c is Loose => isObject(c) && isNumber(c.temperatureC) && isNumber(c.relativeHumidityPercent) && typeof c.state === "string")
+    .map((c) => ({ temperatureC: c.temperatureC as number, relativeHumidityPercent: c.relativeHumidityPercent as number, state: c.state as string }));
+}
+
+function curingCharts(result: Loose): ChartData[] {
+  const curing = result.curing;
+  if (!isObject(curing)) return [];
+  const charts: ChartData[] = [];
+  const t = curing.temperature;
+  if (isObject(t)) {
+    const timesH = numberArray(t.timesH);
+    const coreC = numberArray(t.coreC);
+    const surfaceC = numberArray(t.surfaceC);
+    if (timesH && coreC && surfaceC && timesH.length > 0) {
+      const limits = isObject(curing.limits) ? curing.limits : {};
+      const maxC = isNumber(limits.maxTemperatureC) ? limits.maxTemperatureC : DEF_LIMIT_C;
+      charts.push(
+        elementTemperatureChart(
+          { timesH, coreC, surfaceC, ...(numberArray(t.surfaceBC) ? { surfaceBC: numberArray(t.surfaceBC) } : {}) },
+          { maxTemperatureC: maxC, label: `Delayed-ettringite limit ${maxC} °C` },
+        ),
+      );
+    }
+  }
+  const strength = Array.isArray(curing.strength) ? (curing.strength.filter((s) => isObject(s) && isNumber(s.timeH)) as StrengthPoint[]) : [];
+  const maturity = Array.isArray(curing.maturity) ? (curing.maturity.filter((m) => isObject(m) && isNumber(m.timeH)) as MaturityPoint[]) : [];
+  const targets = Array.isArray(curing.strengthTargets)
+    ? (curing.strengthTargets.filter((x) => isObject(x) && typeof x.label === "string" && isNumber(x.strengthMPa)) as { label: string; strengthMPa: number }[])
+    : [];
+  if (strength.length > 0 || maturity.length > 0) charts.push(strengthMaturityChart(strength, maturity, targets));
+  return charts;
+}
+
+/** Every chart the result supports, in reading order. */
+export function resultCharts(result: unknown): ChartData[] {
+  if (!isObject(result)) return [];
+  const charts: ChartData[] = [];
+  const assemblage = assemblageOf(result);
+  if (assemblage) charts.push(phaseVolumesChart([assemblage]));
+  for (const sweep of sweepsOf(result)) charts.push(scenarioSweepChart(sweep));
+  const timeline = timelineOf(result);
+  if (timeline.length > 1) charts.push(hydrationTimelineChart(timeline));
+  charts.push(...curingCharts(result));
+  const cells = rhMapOf(result);
+  if (cells.length > 0) charts.push(rhTemperatureMapChart(cells));
+  return charts;
+}

@@ -1,15 +1,20 @@
-export default function HomePage() {
+import { Workbench } from "@/components/workbench";
+import { loadSavedInputs } from "@/components/load-saved-inputs";
+
+export const dynamic = "force-dynamic";
+
+export default async function HomePage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+  const params = await searchParams;
+  const from = typeof params.from === "string" ? params.from : undefined;
+  const saved = from ? await loadSavedInputs(from) : null;
   return (
-    <main>
-      <h1>Hydrastate</h1>
-      <p>
-        Concrete durability and curing advisory: the thermodynamic equilibrium hydrate assemblage of a binder, its
-        durability scenarios and the curing temperature of the element.
+    <>
+      <h1>Concrete durability and curing assessment</h1>
+      <p className="lead">
+        The equilibrium hydrate assemblage of a binder at its age, its durability scenarios in the exposure, and the curing temperature of the
+        element, with risk flags and the standards they rest on. Fill the sections in order, or load the demo scenario.
       </p>
-      <p role="note">
-        Hydrastate is a guide. Equilibrium is not kinetics, the thermodynamic data carry uncertainty, and design
-        decisions rest with the governing codes and standards, licensed testing and a responsible engineer.
-      </p>
-    </main>
+      <Workbench initialValues={saved?.inputs} fromName={saved?.name} />
+    </>
   );
 }

@@ -1,0 +1,153 @@
+"use client";
+
+import { useId, useState } from "react";
+import {
+  Area,
+  AreaChart,
+  Bar,
+  BarChart,
+  CartesianGrid,
+  Legend,
+  Line,
+  LineChart,
+  ReferenceLine,
+  ResponsiveContainer,
+  Scatter,
+  ScatterChart,
+  Tooltip,
+  XAxis,
+  YAxis,
+} from "recharts";
+import { axisCaption, type ChartData } from "../../lib/charts/chart-data";
+import { chartCsv, chartCsvFileName } from "../../lib/charts/csv";
+import { DataTable } from "./data-table";
+
+/** A palette distinguishable in print and by most colour-vision types (Okabe & Ito 2008 colour set). */
+const PALETTE = ["#0072B2", "#E69F00", "#009E73", "#CC79A7", "#56B4E9", "#D55E00", "#F0E442", "#000000", "#999999"];
+const DASHES = ["", "6 3", "2 2", "8 3 2 3"];
+
+const colourOf = (index: number) => PALETTE[index % PALETTE.length];
+
+function downloadCsv(chart: ChartData) {
+  const blob = new Blob([chartCsv(chart)], { type: "text/csv;charset=utf-8" });
+  const url = URL.createObjectURL(blob);
+  const a = document.createElement("a");
+  a.href = url;
+  a.download = chartCsvFileName(chart);
+  document.body.appendChild(a);
+  a.click();
+  a.remove();
+  setTimeout(() => URL.revokeObjectURL(url), 1000);
+}
+
+function Axes({ chart }: { chart: ChartData }) {
+  const xIsNumber = chart.x.scale !== "category";
+  return (
+    <>
+      <CartesianGrid strokeDasharray="3 3" />
+      <XAxis
+        dataKey={chart.x.key}
+        type={xIsNumber ? "number" : "category"}
+        scale={chart.x.scale === "log" ? "log" : "auto"}
+        domain={xIsNumber ? ["auto", "auto"] : undefined}
+        allowDataOverflow={false}
+        label={{ value: axisCaption(chart.x.label, chart.x.unit), position: "insideBottom", offset: -10 }}
+      />
+      <YAxis yAxisId="left" label={{ value: axisCaption(chart.yLeft.label, chart.yLeft.unit), angle: -90, position: "insideLeft", style: { textAnchor: "middle" } }} />
+      {chart.yRight ? (
+        <YAxis yAxisId="right" orientation="right" domain={["auto", "auto"]} label={{ value: axisCaption(chart.yRight.label, chart.yRight.unit), angle: 90, position: "insideRight", style: { textAnchor: "middle" } }} />
+      ) : null}
+      <Tooltip />
+      <Legend verticalAlign="top" />
+      {chart.thresholds.map((t) => (
+        <ReferenceLine key={t.label} yAxisId={t.axis} y={t.value} stroke="#B00020" strokeDasharray="6 4" label={{ value: t.label, position: "insideTopLeft" }} />
+      ))}
+    </>
+  );
+}
+
+function Drawing({ chart }: { chart: ChartData }) {
+  const margin = { top: 10, right: chart.yRight ? 30 : 10, bottom: 30, left: 10 };
+  switch (chart.kind) {
+    case "stacked-bar":
+      return (
+        <BarChart data={chart.rows} margin={margin}>
+          {Axes({ chart })}
+          {chart.series.map((s, i) => (
+            <Bar key={s.key} dataKey={s.key} name={s.label} stackId="stack" yAxisId={s.axis} fill={colourOf(i)} isAnimationActive={false} />
+          ))}
+        </BarChart>
+      );
+    case "stacked-area":
+      return (
+        <AreaChart data={chart.rows} margin={margin}>
+          {Axes({ chart })}
+          {chart.series.map((s, i) =>
+            s.axis === "left" ? (
+              <Area key={s.key} dataKey={s.key} name={s.label} stackId="stack" yAxisId="left" type="monotone" stroke={colourOf(i)} fill={colourOf(i)} fillOpacity={0.6} isAnimationActive={false} />
+            ) : (
+              <Area key={s.key} dataKey={s.key} name={s.label} yAxisId="right" type="monotone" stroke="#000" strokeWidth={2} strokeDasharray="5 3" fill="none" isAnimationActive={false} connectNulls={false} />
+            ),
+          )}
+        </AreaChart>
+      );
+    case "scatter":
+      return (
+        <ScatterChart margin={margin}>
+          {Axes({ chart })}
+          {chart.series.map((s, i) => (
+            <Scatter
+              key={s.key}
+              name={s.label}
+              yAxisId="left"
+              data={chart.rows.filter((r) => r[s.key] !== null).map((r) => ({ [chart.x.key]: r[chart.x.key], [s.key]: r[s.key] }))}
+              dataKey={s.key}
+              fill={colourOf(i)}
+              shape={(["circle", "square", "triangle", "diamond", "cross", "star", "wye"] as const)[i % 7]}
+              isAnimationActive={false}
+            />
+          ))}
+        </ScatterChart>
+      );
+    default:
+      return (
+        <LineChart data={chart.rows} margin={margin}>
+          {Axes({ chart })}
+          {chart.series.map((s, i) => (
+            <Line key={s.key} dataKey={s.key} name={s.label} yAxisId={s.axis} type="monotone" stroke={colourOf(i)} strokeDasharray={DASHES[i % DASHES.length]} dot={false} strokeWidth={2} isAnimationActive={false} connectNulls={false} />
+          ))}
+        </LineChart>
+      );
+  }
+}
+
+/** One chart with its title, axis units, legend, a data-table toggle and a CSV download. */
+export function ChartPanel({ chart, height = 320 }: { chart: ChartData; height?: number }) {
+  const [showTable, setShowTable] = useState(false);
+  const tableId = useId();
+  const titleId = useId();
+  return (
+    <figure className="chart-panel" aria-labelledby={titleId} data-chart={chart.id}>
+      <figcaption id={titleId}>
+        <h4>{chart.title}</h4>
+        {chart.note ? <p className="hint">{chart.note}</p> : null}
+      </figcaption>
+      <div className="chart-drawing" role="img" aria-label={`${chart.title}: ${chart.series.map((s) => s.label).join(", ")} against ${axisCaption(chart.x.label, chart.x.unit)}. The data table below gives the values.`}>
+        <ResponsiveContainer width="100%" height={height} minWidth={200} initialDimension={{ width: 640, height }}>
+          {Drawing({ chart })}
+        </ResponsiveContainer>
+      </div>
+      <div className="chart-actions">
+        <button type="button" className="secondary" aria-expanded={showTable} aria-controls={tableId} onClick={() => setShowTable((v) => !v)}>
+          {showTable ? "Hide data table" : "Show data table"}
+        </button>
+        <button type="button" className="secondary" onClick={() => downloadCsv(chart)}>
+          Download CSV
+        </button>
+      </div>
+      <div id={tableId} hidden={!showTable} className="chart-table">
+        {showTable ? <DataTable chart={chart} /> : null}
+      </div>
+    </figure>
+  );
+}

@@ -1,0 +1,57 @@
+"use client";
+
+import { cautionsOf, flagsOf, keyFigures } from "../../lib/report/key-figures";
+import { resultCharts } from "../../lib/charts/result-charts";
+import { cautionTextsFor } from "../../lib/advisory/cautions";
+import { CautionList, FlagList } from "./flag-list";
+import { ChartPanel } from "./chart-panel";
+import { ExposureClassTable, PoreSolutionTable } from "./result-tables";
+import { formatChartCell } from "./data-table";
+
+/**
+ * The results of an assessment: flags first (most severe first), the cautions (always shown, the standard
+ * assessment cautions when a result carries none), key figures, charts and tables.
+ */
+export function ResultsView({ result, heading = "Results" }: { result: unknown; heading?: string }) {
+  const flags = flagsOf(result);
+  const cautions = cautionsOf(result);
+  const figures = keyFigures(result);
+  const charts = resultCharts(result);
+  return (
+    <section className="results" aria-labelledby="results-title">
+      <h2 id="results-title" tabIndex={-1}>
+        {heading}
+      </h2>
+      <section className="result-section" aria-labelledby="flags-title">
+        <h3 id="flags-title">Risk flags</h3>
+        <FlagList flags={flags} />
+      </section>
+      <CautionList cautions={cautions.length > 0 ? cautions : cautionTextsFor("assessment")} />
+      {figures.length > 0 ? (
+        <section className="result-section" aria-labelledby="figures-title">
+          <h3 id="figures-title">Key figures</h3>
+          <dl className="key-figures">
+            {figures.map((f) => (
+              <div key={f.id}>
+                <dt>{f.label}</dt>
+                <dd>
+                  {formatChartCell(f.value)} {f.unit}
+                </dd>
+              </div>
+            ))}
+          </dl>
+        </section>
+      ) : null}
+      {charts.length > 0 ? (
+        <section className="result-section charts" aria-labelledby="charts-title">
+          <h3 id="charts-title">Charts</h3>
+          {charts.map((chart) => (
+            <ChartPanel key={chart.id} chart={chart} />
+          ))}
+        </section>
+      ) : null}
+      <PoreSolutionTable result={result} />
+      <ExposureClassTable result={result} />
+    </section>
+  );
+}

@@ -1,0 +1,74 @@
+// @vitest-environment jsdom
+import { describe, it, expect, vi, afterEach } from "vitest";
+import { cleanup, fireEvent, render, screen, waitFor, within } from "@testing-library/react";
+import { AssessmentForm } from "../../../components/form/assessment-form";
+import { culvertDemo } from "../../../lib/demo/culvert-demo";
+
+afterEach(cleanup);
+
+function type(label: RegExp | string, value: string) {
+  const input = screen.getByLabelText(label) as HTMLInputElement;
+  fireEvent.input(input, { target: { value } });
+  return input;
+}
+
+describe("assessment form validation", () => {
+  it("shows the schema's message naming the limit beside the field and in the summary (w/b 0.25–0.80, binder schema)", async () => {
+    const onSubmit = vi.fn();
+    render(<AssessmentForm onSubmit={onSubmit} />);
+    type(/Project name/, "Test wall");
+    type(/^Thickness/, "0.3");
+    type(/Water\/binder ratio/, "0.95");
+    type(/Binder content/, "350");
+    fireEvent.click(screen.getByRole("button", { name: /run the assessment/i }));
+    const summary = await screen.findByRole("alert");
+    expect(within(summary).getByText("waterBinderRatio must be between 0.25 and 0.80")).toBeTruthy();
+    const input = screen.getByLabelText(/Water\/binder ratio/);
+    expect(input.getAttribute("aria-invalid")).toBe("true");
+    const describedBy = input.getAttribute("aria-describedby")!.split(" ");
+    const errorText = describedBy.map((id) => document.getElementById(id)?.textContent ?? "").join(" ");
+    expect(errorText).toContain("waterBinderRatio must be between 0.25 and 0.80");
+    expect(onSubmit).not.toHaveBeenCalled();
+  });
+
+  it("links each summary entry to its field", async () => {
+    render(<AssessmentForm onSubmit={vi.fn()} />);
+    type(/Binder content/, "900");
+    fireEvent.click(screen.getByRole("button", { name: /run the assessment/i }));
+    const summary = await screen.findByRole("alert");
+    const link = within(summary).getByText("binderContentKgPerM3 must be between 200 and 700 kg/m³") as HTMLAnchorElement;
+    const target = document.getElementById(link.getAttribute("href")!.slice(1));
+    expect(target).toBe(screen.getByLabelText(/Binder content/));
+    fireEvent.click(link);
+    expect(document.activeElement).toBe(target);
+  });
+
+  it("names required fields that were left empty", async () => {
+    render(<AssessmentForm onSubmit={vi.fn()} />);
+    fireEvent.click(screen.getByRole("button", { name: /run the assessment/i }));
+    const summary = await screen.findByRole("alert");
+    expect(within(summary).getByText("project.name is required")).toBeTruthy();
+    expect(within(summary).getByText("waterBinderRatio is required")).toBeTruthy();
+  });
+
+  it("submits the demo scenario as a valid input one click away, labelled as a demo", async () => {
+    const onSubmit = vi.fn();
+    render(<AssessmentForm onSubmit={onSubmit} />);
+    fireEvent.click(screen.getByRole("button", { name: /load the demo scenario/i }));
+    expect(await screen.findByText(/Demo scenario \(invented numbers\)/)).toBeTruthy();
+    expect((screen.getByLabelText(/Project name/) as HTMLInputElement).value).toBe(culvertDemo.project!.name);
+    fireEvent.click(screen.getByRole("button", { name: /run the assessment/i }));
+    await waitFor(() => expect(onSubmit).toHaveBeenCalledTimes(1));
+    const input = onSubmit.mock.calls[0][0];
+    expect(input.mix.waterBinderRatio).toBe(0.45);
+    expect(input.exposure.sulfateMgPerL).toBe(1800);
+    expect(input.exposure.coverMm).toBe(50);
+    expect(input.binder.supplementaryMaterials).toHaveLength(1);
+  });
+
+  it("groups the sections in fieldsets with legends in the order an engineer fills them", () => {
+    render(<AssessmentForm onSubmit={vi.fn()} />);
+    const legends = Array.from(document.querySelectorAll("fieldset.section > legend")).map((l) => l.textContent);
+    expect(legends).toEqual(["1. Project and element", "2. Binder", "3. Mix", "4. Age", "5. Exposure", "6. Curing and climate", "7. Run options"]);
+  });
+});

@@ -1,8 +1,9 @@
-import packageJson from "../../package.json";
+import { runningVersions } from "./versions";
 
-export type HealthReport = { status: "ok"; service: "hydrastate"; engineVersion: string; checkedAt: string };
+export type HealthReport = { status: "ok"; service: "hydrastate"; engineVersion: string; datasetVersion: string; checkedAt: string };
 
-/** The health document served at GET /api/health: the service is up and which engine version answers. */
+/** The health document served at GET /api/v1/health (and /api/health): up, and which engine and data set answer. */
 export function healthReport(now: Date = new Date()): HealthReport {
-  return { status: "ok", service: "hydrastate", engineVersion: packageJson.version, checkedAt: now.toISOString() };
+  const versions = runningVersions();
+  return { status: "ok", service: "hydrastate", engineVersion: versions.engine, datasetVersion: versions.dataset, checkedAt: now.toISOString() };
 }

@@ -107,23 +107,26 @@ function run(
         },
       };
     }
-    // Remove the phase with the most negative amount, if any.
+    // Remove a phase whose amount turned negative. After an addition, the ratio test of the simplex
+    // method picks it: along the path from the previous (non-negative) amounts to the new ones, the
+    // phase that reaches zero first leaves. This avoids the cycling of "most negative leaves".
     let worst = -1;
-    let worstAmount = 0;
+    let worstKey = Infinity;
     s.active.forEach((on, k) => {
       if (!on || p.phases[k].kind === "reservoir") return;
       const relative = s.amount[k] / amountScale(p, k);
-      if (relative < worstAmount) {
-        worstAmount = relative;
+      if (!(relative < -1e-14)) return;
+      const before = beforeAdd && beforeAdd.active[k] ? Math.max(0, beforeAdd.amount[k]) : 0;
+      const key = beforeAdd ? before / (before - s.amount[k]) : relative;
+      if (key < worstKey) {
+        worstKey = key;
         worst = k;
       }
     });
-    if (worst >= 0 && worstAmount < -1e-14) {
+    if (worst >= 0) {
       if (++changes > maxChanges) return noConvergence(p, s, iterations, "too many phase changes");
       s.active[worst] = 0;
       s.amount[worst] = 0;
-      lastAdded = -1;
-      beforeAdd = undefined;
       continue;
     }
     // Add the most supersaturated absent phase.
@@ -168,7 +171,14 @@ function run(
     const key = activeIds(p, s).join("|");
     const seen = (visits.get(key) ?? 0) + 1;
     visits.set(key, seen);
-    if (seen > 3) return noConvergence(p, s, iterations, "the phase set cycles");
+    if (seen > 3) {
+      // The phase set cycles (nearly degenerate phases trading places): leave out the phase just added.
+      if (lastAdded < 0 || !beforeAdd) return noConvergence(p, s, iterations, "the phase set cycles");
+      blocked[lastAdded] = 1;
+      Object.assign(s, cloneState(beforeAdd));
+      lastAdded = -1;
+      beforeAdd = undefined;
+    }
   }
 }
 
@@ -180,7 +190,44 @@ function activeIds(p: EquilibriumProblem, s: SolverState): string[] {
   return p.phases.filter((_, k) => s.active[k]).map((phase) => phase.id);
 }
 
+/**
+ * The Gibbs phase rule in its linear-algebra form: the condition vectors of the phases that fix element
+ * potentials exactly (pure solids a_k, fixed-pressure gases a_r, and the solvent a_w when the solution is
+ * present) must be linearly independent. Hydrates that differ only in water (C4AH13/C4AH19, gypsum/
+ * anhydrite) fail this next to an aqueous solution except at one temperature. Checked on the plain
+ * stoichiometry, so near-dependence hidden by activity terms is caught too; then the full Newton matrix.
+ */
 function isSingular(p: EquilibriumProblem, s: SolverState): boolean {
+  const nE = p.elements.length;
+  const basis: Float64Array[] = [];
+  const addVector = (i: number): boolean => {
+    const v = new Float64Array(nE);
+    for (let j = 0; j < nE; j++) v[j] = p.stoich[i * nE + j];
+    let norm0 = 0;
+    for (const x of v) norm0 += x * x;
+    norm0 = Math.sqrt(norm0);
+    for (const b of basis) {
+      let d = 0;
+      for (let j = 0; j < nE; j++) d += b[j] * v[j];
+      for (let j = 0; j < nE; j++) v[j] -= d * b[j];
+    }
+    let norm = 0;
+    for (const x of v) norm += x * x;
+    norm = Math.sqrt(norm);
+    if (norm <= 1e-8 * norm0) return false;
+    for (let j = 0; j < nE; j++) v[j] /= norm;
+    basis.push(v);
+    return true;
+  };
+  for (let k = 0; k < p.phases.length; k++) {
+    if (!s.active[k]) continue;
+    const kind = p.phases[k].kind;
+    if (kind === "pure-solid" || kind === "reservoir") {
+      if (!addVector(p.phases[k].species[0])) return true;
+    } else if (kind === "aqueous" && p.water >= 0) {
+      if (!addVector(p.water)) return true;
+    }
+  }
   const a = assemble(p, s);
   return !solveInPlace(a.matrix, a.rhs, a.size);
 }

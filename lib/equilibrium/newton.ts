@@ -320,11 +320,23 @@ export function solveFixedPhases(p: EquilibriumProblem, s: SolverState, o: Newto
     for (let j = 0; j < nE; j++) s.lambda[j] += alpha * delta[j];
     if (a.lnICol >= 0) s.lnIonicStrength += alpha * delta[a.lnICol];
     const base = nE + (a.lnICol >= 0 ? 1 : 0);
+    let diverging = false;
     a.activeList.forEach((phase, k) => {
       s.amount[phase] += alpha * delta[base + k];
+      if (!(Math.abs(s.amount[phase]) <= divergenceLimit(p))) diverging = true;
     });
+    // Amounts far beyond the system's size mean a nearly singular phase set: stop early.
+    if (diverging)
+      return { converged: false, iterations: iteration + 1, balanceResidual: Infinity, conditionResidual: Infinity, singular: true };
   }
   return { converged: false, iterations: o.maxIterations, balanceResidual: last?.balanceResidual ?? Infinity, conditionResidual: last?.conditionResidual ?? Infinity, singular: false };
+}
+
+/** Phase amounts beyond 10⁶ times the total element amount are a diverging Newton iteration. */
+function divergenceLimit(p: EquilibriumProblem): number {
+  let total = 0;
+  for (let j = 0; j < p.totals.length; j++) total += Math.abs(p.totals[j]);
+  return 1e6 * Math.max(total, 1e-300);
 }
 
 /** Largest change of ln(amount) allowed per step for abundant species, and for any species. */

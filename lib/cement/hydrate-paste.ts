@@ -1,0 +1,267 @@
+import { molarMassGPerMol } from "../chem/atomic-weights";
+import { loadDataset, type Dataset } from "../data/load-dataset";
+import { suppressedPhases } from "../data/kinetic-constraints";
+import alkaliUptake from "../data/binders/alkali-uptake.json";
+import { equilibrateSystem } from "../equilibrium/equilibrate";
+import type { EquilibriumFailure } from "../equilibrium/failure";
+import type { EquilibriumResult, SerializedState } from "../equilibrium/result";
+import { potassiumHydroxideDominatedParameters } from "../thermo/truesdell-jones";
+import { waterDensityKgPerM3 } from "../thermo/water-density";
+import type { BulkComposition, BulkCompositionWarning } from "./bulk-composition";
+import { capillaryPorosityFraction, chemicalShrinkageCm3, initialPasteVolumeCm3, mixingWaterDensityGPerCm3, per100gToPerM3, volumeBalance, type VolumeBalance } from "./volumes";
+
+/** Molar mass of water, g/mol (IUPAC 2021 atomic weights: 2 × 1.008 + 15.999). */
+const WATER_G_PER_MOL = 18.015;
+const KELVIN_OFFSET = 273.15;
+
+export type PhaseAmount = {
+  id: string;
+  origin: "hydrate" | "unreacted";
+  grams: number;
+  volumeCm3: number;
+};
+
+export type HydrationWarning =
+  | BulkCompositionWarning
+  | { code: "ionic_strength_beyond_activity_model"; ionicStrengthMolPerKg: number; validUpToMolPerKg: number }
+  | { code: "no_pore_solution"; message: string };
+
+/** The hydrated paste at one age, per 100 g binder, with the same figures per m³ of concrete. */
+export type HydratedPaste = {
+  temperatureC: number;
+  assemblage: EquilibriumResult;
+  /** Every solid, hydrates and unreacted binder: grams and cm³ per 100 g binder. */
+  phases: PhaseAmount[];
+  /** Phase id → cm³ per 100 g binder, the unreacted binder and `pore-solution` included. */
+  volumes: Record<string, number>;
+  porosity: {
+    initialPasteVolumeCm3: number;
+    poreSolutionVolumeCm3: number;
+    chemicalShrinkageCm3: number;
+    /** (pore solution + chemical shrinkage) / initial paste volume. */
+    capillaryFraction: number;
+    balance: VolumeBalance;
+  };
+  boundWaterG: number;
+  portlanditeG: number;
+  /** Ca in hydrates other than carbonates, mol per 100 g binder: what carbonation can turn into CaCO3. */
+  carbonatableCaMol: number;
+  /** Alkali held in C-S-H by the distribution ratio (Hong & Glasser 1999), mol per 100 g binder. */
+  alkaliInCshMol: Record<string, number>;
+  poreSolution: {
+    pH: number | null;
+    ionicStrengthMolPerKg: number | null;
+    waterKg: number;
+    elementsMmolPerKg: Record<string, number>;
+  } | null;
+  perM3: {
+    binderContentKgPerM3: number;
+    phasesKg: Record<string, number>;
+    volumesLitres: Record<string, number>;
+    portlanditeKg: number;
+    boundWaterKg: number;
+    carbonatableCaMol: number;
+  };
+  warnings: HydrationWarning[];
+};
+
+export type HydrationOptions = {
+  temperatureC: number;
+  binderContentKgPerM3: number;
+  /** Extra phases to suppress, and default constraints to lift. */
+  suppress?: readonly string[];
+  enable?: readonly string[];
+  warmStart?: SerializedState;
+  /** Fractions of Na and K bound in C-S-H at a neighbouring age: the starting guess of the uptake iteration. */
+  alkaliBoundFraction?: Record<string, number>;
+  dataset?: Dataset;
+  timeLimitMs?: number;
+};
+
+/** Ionic strength up to which the b-dot model is used with confidence, mol/kg (common practice). */
+const ACTIVITY_MODEL_LIMIT_MOL_PER_KG = 1;
+
+/** H2O-equivalent water held in the solids (H/2 per formula unit), mol per 100 g binder. */
+function boundWaterMol(result: EquilibriumResult, elementsOf: (id: string) => Record<string, number>): number {
+  let total = 0;
+  for (const phase of result.phases) {
+    for (const member of phase.members ?? [{ id: phase.id, moles: phase.moles }]) total += ((elementsOf(member.id).H ?? 0) / 2) * member.moles;
+  }
+  return total;
+}
+
+/**
+ * Equilibrates the reacted part of a paste (bulk composition from the binder model) at the curing
+ * temperature and adds the unreacted binder back as inert solids: the thermodynamic assemblage of a
+ * partly hydrated paste, with unreacted clinker and SCM as the kinetic constraint (Lothenbach &
+ * Winnefeld 2006, Cem. Concr. Res. 36, 209; Lothenbach et al. 2008, Cem. Concr. Res. 38, 1).
+ * Pore-solution activities use the KOH-dominated b-dot set (Helgeson et al. 1981).
+ * Volumes follow `volumes.ts` (Powers & Brownyard definitions).
+ */
+export function hydratePaste(
+  composition: BulkComposition,
+  options: HydrationOptions,
+): { ok: true; value: HydratedPaste } | { ok: false; error: EquilibriumFailure } {
+  let dataset = options.dataset;
+  if (!dataset) {
+    const loaded = loadDataset();
+    if (!loaded.ok) return { ok: false, error: { code: "invalid_input", field: "dataset", message: loaded.error.message } };
+    dataset = loaded.value;
+  }
+  const byId = new Map(dataset.species.map((s) => [s.id, s.elements]));
+  const elementsOf = (id: string): Record<string, number> => byId.get(id) ?? {};
+  const suppressed = suppressedPhases(options.temperatureC, { enable: options.enable, suppress: options.suppress });
+  const uptake = alkaliUptakeByCsh(composition.reactedElementsMol, (totals, warmStart) =>
+    equilibrateSystem({
+      temperatureC: options.temperatureC,
+      elementTotalsMol: totals,
+      suppressedPhases: suppressed,
+      activity: potassiumHydroxideDominatedParameters,
+      warmStart,
+      dataset,
+      timeLimitMs: options.timeLimitMs,
+    }), options.warmStart, options.alkaliBoundFraction);
+  if (!uptake.ok) return uptake;
+  const { assemblage, boundMol } = uptake.value;
+  const warnings: HydrationWarning[] = [...composition.warnings];
+
+  // The bound alkali travel with the C-S-H as hydroxide (mass added, volume neglected: a few tenths of a cm³).
+  const boundHydroxideG = Object.entries(boundMol).reduce((sum, [e, mol]) => sum + mol * molarMassGPerMol({ [e]: 1, O: 1, H: 1 }), 0);
+  const phases: PhaseAmount[] = assemblage.phases.map((p) => ({ id: p.id, origin: "hydrate", grams: p.grams + (p.id === "csh" ? boundHydroxideG : 0), volumeCm3: p.volumeCm3 }));
+  for (const solid of composition.unreactedSolids) {
+    if (solid.massG > 0) phases.push({ id: solid.id, origin: "unreacted", grams: solid.massG, volumeCm3: solid.volumeCm3 });
+  }
+  const hydrateVolumeCm3 = assemblage.phases.reduce((sum, p) => sum + p.volumeCm3, 0);
+  const solution = assemblage.solution;
+  let poreSolutionVolumeCm3 = 0;
+  let poreSolution: HydratedPaste["poreSolution"] = null;
+  if (solution) {
+    // Solution mass = water + dissolved solids; its density taken as that of water at T (dilute-solution
+    // approximation, under 3 % error below 1 mol/kg; common practice).
+    let soluteMassG = 0;
+    for (const s of solution.species) {
+      if (s.name === "H2O(l)") continue;
+      soluteMassG += s.molality * solution.waterKg * molarMassGPerMol(elementsOf(s.name));
+    }
+    const densityGPerCm3 = waterDensityKgPerM3(options.temperatureC + KELVIN_OFFSET) / 1000;
+    poreSolutionVolumeCm3 = (solution.waterKg * 1000 + soluteMassG) / densityGPerCm3;
+    const elementsMmolPerKg: Record<string, number> = {};
+    for (const [e, m] of Object.entries(solution.elementMolality)) if (e !== "H" && e !== "O") elementsMmolPerKg[e] = m * 1000;
+    poreSolution = { pH: assemblage.pH, ionicStrengthMolPerKg: assemblage.ionicStrength, waterKg: solution.waterKg, elementsMmolPerKg };
+    if ((assemblage.ionicStrength ?? 0) > ACTIVITY_MODEL_LIMIT_MOL_PER_KG)
+      warnings.push({ code: "ionic_strength_beyond_activity_model", ionicStrengthMolPerKg: assemblage.ionicStrength!, validUpToMolPerKg: ACTIVITY_MODEL_LIMIT_MOL_PER_KG });
+  } else warnings.push({ code: "no_pore_solution", message: "all water is bound in solids: the paste has no liquid pore solution at equilibrium" });
+
+  const mixingWaterDensity = mixingWaterDensityGPerCm3(options.temperatureC);
+  const initialVolume = initialPasteVolumeCm3(composition.binderVolumeCm3, composition.mixingWaterMassG, mixingWaterDensity);
+  const shrinkage = chemicalShrinkageCm3({
+    reactedBinderVolumeCm3: composition.reactedBinderVolumeCm3,
+    mixingWaterVolumeCm3: composition.mixingWaterMassG / mixingWaterDensity,
+    hydrateVolumeCm3,
+    poreSolutionVolumeCm3,
+  });
+  const volumes: Record<string, number> = {};
+  for (const p of phases) volumes[p.id] = (volumes[p.id] ?? 0) + p.volumeCm3;
+  const solidVolumes = { ...volumes };
+  volumes["pore-solution"] = poreSolutionVolumeCm3;
+
+  // Bound alkali hydroxide XOH carries ½ H2O per X.
+  const boundWaterG = (boundWaterMol(assemblage, elementsOf) + Object.values(boundMol).reduce((a, b) => a + b / 2, 0)) * WATER_G_PER_MOL;
+  const portlanditeG = assemblage.phases.find((p) => p.id === "portlandite")?.grams ?? 0;
+  let carbonatableCaMol = 0;
+  for (const phase of assemblage.phases) {
+    const members = phase.members ?? [{ id: phase.id, moles: phase.moles }];
+    for (const member of members) {
+      const elements = elementsOf(member.id);
+      if (elements.C) continue; // already carbonate (calcite, monocarbonate, hemicarbonate, thaumasite)
+      carbonatableCaMol += (elements.Ca ?? 0) * member.moles;
+    }
+  }
+  const scale = (v: number) => per100gToPerM3(v, options.binderContentKgPerM3);
+  const phasesKg: Record<string, number> = {};
+  const volumesLitres: Record<string, number> = {};
+  // per100gToPerM3 turns g per 100 g binder into kg/m³ and cm³ per 100 g into L/m³.
+  for (const p of phases) phasesKg[p.id] = (phasesKg[p.id] ?? 0) + scale(p.grams);
+  for (const [id, v] of Object.entries(volumes)) volumesLitres[id] = scale(v);
+  return {
+    ok: true,
+    value: {
+      temperatureC: options.temperatureC,
+      assemblage,
+      phases,
+      volumes,
+      porosity: {
+        initialPasteVolumeCm3: initialVolume,
+        poreSolutionVolumeCm3,
+        chemicalShrinkageCm3: shrinkage,
+        capillaryFraction: capillaryPorosityFraction(poreSolutionVolumeCm3, shrinkage, initialVolume),
+        balance: volumeBalance(solidVolumes, poreSolutionVolumeCm3, shrinkage, initialVolume),
+      },
+      boundWaterG,
+      portlanditeG,
+      carbonatableCaMol,
+      alkaliInCshMol: boundMol,
+      poreSolution,
+      perM3: {
+        binderContentKgPerM3: options.binderContentKgPerM3,
+        phasesKg,
+        volumesLitres,
+        portlanditeKg: scale(portlanditeG),
+        boundWaterKg: scale(boundWaterG),
+        // mol per 100 g binder × (B kg/m³ × 10 per 100 g) = mol/m³
+        carbonatableCaMol: carbonatableCaMol * options.binderContentKgPerM3 * 10,
+      },
+      warnings,
+    },
+  };
+}
+
+type Solve = (totals: Record<string, number>, warmStart?: SerializedState) => { ok: true; value: EquilibriumResult } | { ok: false; error: EquilibriumFailure };
+
+/**
+ * Alkali uptake by C-S-H with a constant distribution ratio Rd (mL/g; Hong & Glasser 1999, as applied by
+ * Lothenbach & Winnefeld 2006): bound = Rd·m(C-S-H)·c(pore solution). Each pass removes the bound alkali
+ * as hydroxide (X + O + H, electroneutral) from the system and re-solves, warm-started, until the bound
+ * amounts change by less than the tolerance. The pore solution is taken as 1 mL per g of water.
+ */
+function alkaliUptakeByCsh(
+  totals: Record<string, number>,
+  solve: Solve,
+  warmStart?: SerializedState,
+  startingFraction: Record<string, number> = {},
+): { ok: true; value: { assemblage: EquilibriumResult; boundMol: Record<string, number> } } | { ok: false; error: EquilibriumFailure } {
+  const ratios = alkaliUptake.distributionRatioMlPerG;
+  // `bound` is always the amount removed from the system that `result` was solved for.
+  const withoutBound = (amounts: Record<string, number>) => {
+    const reduced = { ...totals };
+    for (const element of ["Na", "K"] as const) {
+      if (!amounts[element]) continue;
+      reduced[element] -= amounts[element];
+      reduced.O -= amounts[element];
+      reduced.H -= amounts[element];
+    }
+    return reduced;
+  };
+  let bound: Record<string, number> = { Na: (startingFraction.Na ?? 0) * (totals.Na ?? 0), K: (startingFraction.K ?? 0) * (totals.K ?? 0) };
+  let result = solve(withoutBound(bound), warmStart);
+  for (let pass = 0; pass < alkaliUptake.iterations.maximum && result.ok; pass++) {
+    const csh = result.value.phases.find((p) => p.id === "csh");
+    const solution = result.value.solution;
+    if (!csh || !solution) break;
+    const poreMl = solution.waterKg * 1000;
+    const next: Record<string, number> = { Na: 0, K: 0 };
+    let change = 0;
+    for (const element of ["Na", "K"] as const) {
+      const total = totals[element] ?? 0;
+      if (total <= 0) continue;
+      const rdTimesMass = ratios[element].value * csh.grams;
+      next[element] = (total * rdTimesMass) / (poreMl + rdTimesMass);
+      change = Math.max(change, Math.abs(next[element] - bound[element]) / total);
+    }
+    if (change < alkaliUptake.iterations.relativeTolerance) break;
+    result = solve(withoutBound(next), result.value.state);
+    bound = next;
+  }
+  if (!result.ok) return result;
+  return { ok: true, value: { assemblage: result.value, boundMol: Object.fromEntries(Object.entries(bound).filter(([, v]) => v > 0)) } };
+}

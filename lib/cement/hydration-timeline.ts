@@ -1,0 +1,66 @@
+import type { Dataset } from "../data/load-dataset";
+import type { EquilibriumFailure } from "../equilibrium/failure";
+import type { SerializedState } from "../equilibrium/result";
+import { binderTimeline, logarithmicAgesDays } from "./binder-system";
+import { hydratePaste, type HydrationWarning, type PhaseAmount } from "./hydrate-paste";
+import type { ResolvedBinder } from "./resolve-binder";
+
+export type TimelineEntry = {
+  ageDays: number;
+  /** Grams and cm³ per 100 g binder of every solid, hydrates and unreacted binder. */
+  phases: PhaseAmount[];
+  poreSolutionVolumeCm3: number;
+  capillaryPorosityFraction: number;
+  pH: number | null;
+};
+
+/**
+ * The assemblage against age on a logarithmic axis at one curing temperature: reaction degrees from the
+ * binder model at each age, each equilibrium warm-started from the previous age (the compositions change
+ * smoothly, so most points need one or two Newton iterations).
+ */
+export function hydrationTimeline(
+  binder: ResolvedBinder,
+  options: {
+    temperatureC: number;
+    points: number;
+    firstAgeDays: number;
+    lastAgeDays: number;
+    suppress?: readonly string[];
+    enable?: readonly string[];
+    dataset?: Dataset;
+  },
+): { ok: true; value: { entries: TimelineEntry[]; warnings: HydrationWarning[] } } | { ok: false; error: EquilibriumFailure & { ageDays?: number } } {
+  const ages = logarithmicAgesDays(options.firstAgeDays, options.lastAgeDays, options.points);
+  const compositions = binderTimeline(binder, ages, options.temperatureC);
+  if (!compositions.ok)
+    return { ok: false, error: { code: "infeasible_composition", message: `the cement analysis gives a negative ${compositions.error.phase} (${compositions.error.massG.toFixed(2)} g per 100 g)` } };
+  const entries: TimelineEntry[] = [];
+  const warnings = new Map<string, HydrationWarning>();
+  let warmStart: SerializedState | undefined;
+  let alkaliBoundFraction: Record<string, number> | undefined;
+  for (const point of compositions.value) {
+    const paste = hydratePaste(point.composition, {
+      temperatureC: options.temperatureC,
+      binderContentKgPerM3: binder.mix.binderContentKgPerM3,
+      suppress: options.suppress,
+      enable: options.enable,
+      warmStart,
+      alkaliBoundFraction,
+      dataset: options.dataset,
+    });
+    if (!paste.ok) return { ok: false, error: { ...paste.error, ageDays: point.ageDays } };
+    warmStart = paste.value.assemblage.state;
+    const reacted = point.composition.reactedElementsMol;
+    alkaliBoundFraction = Object.fromEntries(Object.entries(paste.value.alkaliInCshMol).map(([e, mol]) => [e, reacted[e as "Na" | "K"] > 0 ? mol / reacted[e as "Na" | "K"] : 0]));
+    for (const w of paste.value.warnings) warnings.set(w.code, w);
+    entries.push({
+      ageDays: point.ageDays,
+      phases: paste.value.phases,
+      poreSolutionVolumeCm3: paste.value.porosity.poreSolutionVolumeCm3,
+      capillaryPorosityFraction: paste.value.porosity.capillaryFraction,
+      pH: paste.value.poreSolution?.pH ?? null,
+    });
+  }
+  return { ok: true, value: { entries, warnings: [...warnings.values()] } };
+}

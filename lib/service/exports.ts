@@ -1,5 +1,5 @@
 import { seriesCsv } from "../report/csv-export";
-import { resultCharts } from "../report/result-charts";
+import { resultCharts } from "../charts/result-charts";
 import type { AssessmentStore } from "../store/assessment-store";
 import { getAssessment } from "./assessments";
 import { errorResponse } from "./http";

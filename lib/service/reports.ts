@@ -2,7 +2,7 @@ import { loadDataset } from "../data/load-dataset";
 import { renderMarkdownReport } from "../report/markdown-report";
 import { renderPdfReport } from "../report/pdf-report";
 import { buildReportModel, type ReportModel } from "../report/report-model";
-import { resultCharts } from "../report/result-charts";
+import { resultCharts } from "../charts/result-charts";
 import type { AssessmentStore } from "../store/assessment-store";
 import { readDossier } from "../validation/dossier";
 import { getAssessment } from "./assessments";

@@ -19,7 +19,7 @@ const inputs = {
 };
 /** A result as the assess route returns it (typical values, invented for the test). */
 const result = (pH: number) => ({
-  assemblage: { pH, volumes: { "C-S-H": 30, portlandite: 8, "pore-solution": 10 }, temperatureC: 20 },
+  assemblage: { pH, label: "28 d at 20 °C", phaseVolumesCm3: { "C-S-H": 30, portlandite: 8 }, poreSolutionCm3: 10 },
   flags: [{ id: "sulfate-attack", severity: "warning", title: "Sulfate attack", explanation: "x", basis: "EN 206", actions: [] }],
   cautions: ["Typical caution text for the test: defer to local codes and a licensed engineer."],
   versions: runningVersions(),
@@ -119,7 +119,7 @@ describe("/api/v1/assessments/{id}", () => {
     expect(csv.headers.get("content-type")).toMatch(/text\/csv/);
     const lines = (await csv.text()).split("\r\n");
     expect(lines[0]).toBe("chart,x,x unit,x value,series,unit,value");
-    expect(lines).toContain("phase-volumes,Assemblage,,at 20 °C,portlandite,cm³/100 g binder,8");
+    expect(lines).toContain("phase-volumes,Assemblage,,28 d at 20 °C,portlandite,cm³/100 g binder,8");
     const missing = await getOne(jsonRequest(`/assessments/none.csv`, "GET"), context({ id: "none.csv" }));
     expect(missing.status).toBe(404);
   });

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { expectReference } from "../support/reference-check";
 import { debyeHuckelParameters, debyeHuckelPrefactors } from "../../lib/thermo/debye-huckel";
 
 describe("Debye–Hückel parameters of water", () => {
@@ -9,7 +10,7 @@ describe("Debye–Hückel parameters of water", () => {
   });
 
   it("give A(25 °C) = 0.509 ± 0.002 kg^½ mol^-½ (Helgeson 1981, Am. J. Sci. 281, 1249; standard texts)", () => {
-    expect(Math.abs(debyeHuckelParameters(298.15).aKgHalfPerMolHalf - 0.509)).toBeLessThan(0.002);
+    expectReference({ id: "debye-huckel-A-25C-helgeson", quantity: "Debye–Hückel A", conditions: "25 °C, 1 bar", source: "Helgeson 1981, Am. J. Sci. 281, 1249; standard texts", reference: 0.509, computed: debyeHuckelParameters(298.15).aKgHalfPerMolHalf, tolerance: 0.002, unit: "kg^½ mol^-½" });
   });
 
   // Freeze & Cherry 1979, Groundwater, Appendix IV: A in kg^½ mol^-½, B in 10⁸ cm⁻¹ kg^½ mol^-½ (= Å⁻¹ kg^½ mol^-½).
@@ -22,8 +23,10 @@ describe("Debye–Hückel parameters of water", () => {
   for (const row of freezeCherryTable) {
     it(`give A and B at ${row.temperatureC} °C within 1 % of Freeze & Cherry 1979, Appendix IV`, () => {
       const parameters = debyeHuckelParameters(273.15 + row.temperatureC);
-      expect(Math.abs(parameters.aKgHalfPerMolHalf / row.a - 1)).toBeLessThan(0.01);
-      expect(Math.abs(parameters.bKgHalfPerMolHalfPerAngstrom / row.b - 1)).toBeLessThan(0.01);
+      const source = "Freeze & Cherry 1979, Groundwater, Appendix IV";
+      const conditions = `${row.temperatureC} °C, 1 bar`;
+      expectReference({ id: `debye-huckel-A-${row.temperatureC}C`, quantity: "Debye–Hückel A", conditions, source, reference: row.a, computed: parameters.aKgHalfPerMolHalf, tolerance: 0.01, relative: true, unit: "kg^½ mol^-½" });
+      expectReference({ id: `debye-huckel-B-${row.temperatureC}C`, quantity: "Debye–Hückel B", conditions, source, reference: row.b, computed: parameters.bKgHalfPerMolHalfPerAngstrom, tolerance: 0.01, relative: true, unit: "Å⁻¹ kg^½ mol^-½" });
     });
   }
 

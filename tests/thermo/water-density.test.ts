@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { expectReference } from "../support/reference-check";
 import { waterDensityDerivativeKgPerM3PerK, waterDensityKgPerM3 } from "../../lib/thermo/water-density";
 import { ThermoInputError } from "../../lib/thermo/thermo-error";
 import { liquidReference, relativeDeviation } from "./water-reference";
@@ -7,7 +8,17 @@ describe("water density at 1 bar", () => {
   it("is within 0.1 % of IAPWS-95 from 0.01 to 99 °C (python3-iapws fixture)", () => {
     expect(liquidReference.length).toBeGreaterThanOrEqual(21);
     for (const point of liquidReference) {
-      expect(relativeDeviation(waterDensityKgPerM3(point.temperatureK), point.densityKgPerM3)).toBeLessThan(1e-3);
+      expectReference({
+        id: `density-${point.temperatureC}C`,
+        quantity: "Density of liquid water",
+        conditions: `${point.temperatureC} °C, 0.1 MPa`,
+        source: "IAPWS-95 via Debian python3-iapws (fixture)",
+        reference: point.densityKgPerM3,
+        computed: waterDensityKgPerM3(point.temperatureK),
+        tolerance: 1e-3,
+        relative: true,
+        unit: "kg/m³",
+      });
     }
   });
 

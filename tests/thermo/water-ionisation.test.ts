@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { expectReference } from "../support/reference-check";
 import { log10Kw } from "../../lib/thermo/water-ionisation";
 import { liquidReference } from "./water-reference";
 
@@ -8,17 +9,35 @@ describe("ionisation constant of water at 1 bar", () => {
     for (const temperatureC of checkedC) {
       const point = liquidReference.find((p) => p.temperatureC === temperatureC);
       expect(point, `fixture point at ${temperatureC} °C`).toBeDefined();
-      expect(Math.abs(-log10Kw(point!.temperatureK) - point!.pKw)).toBeLessThan(0.02);
+      expectReference({
+        id: `pKw-iapws-${temperatureC}C`,
+        quantity: "pKw of water",
+        conditions: `${temperatureC} °C, 0.1 MPa, on IAPWS-95 density`,
+        source: "IAPWS R11-07 via Debian python3-iapws (fixture)",
+        reference: point!.pKw,
+        computed: -log10Kw(point!.temperatureK),
+        tolerance: 0.02,
+        unit: "",
+      });
     }
   });
 
   it("gives pKw = 13.995 at 25 °C (IAPWS R11-07, Bandura & Lvov 2006, table; CRC Handbook)", () => {
-    expect(Math.abs(-log10Kw(298.15) - 13.995)).toBeLessThan(0.002);
+    expectReference({ id: "pKw-25C", quantity: "pKw of water", conditions: "25 °C, 0.1 MPa", source: "IAPWS R11-07, Bandura & Lvov 2006, table; CRC Handbook", reference: 13.995, computed: -log10Kw(298.15), tolerance: 0.002, unit: "" });
   });
 
   it("gives pKw = 14.946, 13.264, 12.696 at 0, 50, 75 °C (Bandura & Lvov 2006, table at 0.1 MPa)", () => {
-    expect(Math.abs(-log10Kw(273.15) - 14.946)).toBeLessThan(0.002);
-    expect(Math.abs(-log10Kw(323.15) - 13.264)).toBeLessThan(0.002);
-    expect(Math.abs(-log10Kw(348.15) - 12.696)).toBeLessThan(0.002);
+    for (const [temperatureC, pKw] of [[0, 14.946], [50, 13.264], [75, 12.696]]) {
+      expectReference({
+        id: `pKw-${temperatureC}C`,
+        quantity: "pKw of water",
+        conditions: `${temperatureC} °C, 0.1 MPa`,
+        source: "Bandura & Lvov 2006, table at 0.1 MPa",
+        reference: pKw,
+        computed: -log10Kw(273.15 + temperatureC),
+        tolerance: 0.002,
+        unit: "",
+      });
+    }
   });
 });

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { expectReference } from "../support/reference-check";
 import {
   relativePermittivityFromDensity,
   waterRelativePermittivity,
@@ -10,12 +11,31 @@ import { liquidReference, relativeDeviation } from "./water-reference";
 describe("relative permittivity of water at 1 bar", () => {
   it("reproduces the check value printed in the IAPWS R8-97 release at 298.15 K, 999.242866 kg/m³", () => {
     // IAPWS R8-97 (Fernández et al. 1997), table of computer-program verification values: ε = 78.5907250.
-    expect(relativePermittivityFromDensity(999.242866, 298.15)).toBeCloseTo(78.590725, 5);
+    expectReference({
+      id: "permittivity-R8-97-check-value",
+      quantity: "Relative permittivity of water",
+      conditions: "298.15 K, 999.242866 kg/m³ (verification point)",
+      source: "IAPWS R8-97 (Fernández et al. 1997), computer-program verification table",
+      reference: 78.590725,
+      computed: relativePermittivityFromDensity(999.242866, 298.15),
+      tolerance: 5e-6,
+      unit: "",
+    });
   });
 
   it("is within 0.1 % of IAPWS R8-97 on IAPWS-95 density from 0.01 to 99 °C (python3-iapws fixture)", () => {
     for (const point of liquidReference) {
-      expect(relativeDeviation(waterRelativePermittivity(point.temperatureK), point.relativePermittivity)).toBeLessThan(1e-3);
+      expectReference({
+        id: `permittivity-${point.temperatureC}C`,
+        quantity: "Relative permittivity of water",
+        conditions: `${point.temperatureC} °C, 0.1 MPa, on IAPWS-95 density`,
+        source: "IAPWS R8-97 via Debian python3-iapws (fixture)",
+        reference: point.relativePermittivity,
+        computed: waterRelativePermittivity(point.temperatureK),
+        tolerance: 1e-3,
+        relative: true,
+        unit: "",
+      });
     }
   });
 
@@ -43,6 +63,6 @@ describe("relative permittivity of water at 1 bar", () => {
   });
 
   it("gives ε(25 °C) = 78.41 (IAPWS R8-97 tables; 78.4 in the CRC Handbook, common practice)", () => {
-    expect(waterRelativePermittivity(298.15)).toBeCloseTo(78.41, 1);
+    expectReference({ id: "permittivity-25C", quantity: "Relative permittivity of water", conditions: "25 °C, 0.1 MPa", source: "IAPWS R8-97 tables; 78.4 in the CRC Handbook (common practice)", reference: 78.41, computed: waterRelativePermittivity(298.15), tolerance: 0.05, unit: "" });
   });
 });

@@ -132,7 +132,10 @@ export function ChartPanel({ chart, height = 320 }: { chart: ChartData; height?:
         <h4>{chart.title}</h4>
         {chart.note ? <p className="hint">{chart.note}</p> : null}
       </figcaption>
-      <div className="chart-drawing" role="img" aria-label={`${chart.title}: ${chart.series.map((s) => s.label).join(", ")} against ${axisCaption(chart.x.label, chart.x.unit)}. The data table below gives the values.`}>
+      <p className="visually-hidden">
+        {`${chart.title}: ${chart.series.map((s) => s.label).join(", ")} against ${axisCaption(chart.x.label, chart.x.unit)}. The data table gives the values.`}
+      </p>
+      <div className="chart-drawing">
         <ResponsiveContainer width="100%" height={height} minWidth={200} initialDimension={{ width: 640, height }}>
           {Drawing({ chart })}
         </ResponsiveContainer>

@@ -32,7 +32,7 @@ describe.skipIf(chromiumMissing)("assessment flow in Chromium (skipped when /usr
   const url = (path: string) => `${server.baseUrl}${path}`;
 
   async function typeInto(label: string | RegExp, text: string) {
-    const field = browser.page.getByLabel(label).first();
+    const field = browser.page.getByLabel(label, { exact: typeof label === "string" }).first();
     await field.click();
     await field.fill("");
     await field.pressSequentially(text);
@@ -41,18 +41,18 @@ describe.skipIf(chromiumMissing)("assessment flow in Chromium (skipped when /usr
   async function fillAssessment(waterBinderRatio: string) {
     const { page } = browser;
     await page.goto(url("/"));
-    await typeInto("Project name", PROJECT_NAME);
+    await typeInto(/^Project name/, PROJECT_NAME);
     await typeInto("Reference", "E2E-1");
     await typeInto(/^Thickness/, "0.6");
     await typeInto("Nominal cover", "45");
-    await page.getByLabel("Cement type").selectOption("en197-cem-i");
-    await typeInto("Water/binder ratio", waterBinderRatio);
-    await typeInto("Binder content", "340");
+    await page.getByLabel("Cement type", { exact: true }).selectOption("en197-cem-i");
+    await typeInto(/^Water\/binder ratio/, waterBinderRatio);
+    await typeInto(/^Binder content/, "340");
     await typeInto("Sulfate in groundwater", "2400");
-    await page.getByLabel("Sulfate cation").selectOption("Na");
+    await page.getByLabel("Sulfate cation", { exact: true }).selectOption("Na");
     await typeInto("Service temperature", "10");
     await typeInto("Relative humidity", "90");
-    await page.getByLabel("Wetting").selectOption("permanently-wet");
+    await page.getByLabel("Wetting", { exact: true }).selectOption("permanently-wet");
     await typeInto("Maximum concrete temperature", "74");
     await typeInto("Points per scenario sweep", "8");
   }
@@ -80,7 +80,7 @@ describe.skipIf(chromiumMissing)("assessment flow in Chromium (skipped when /usr
     await page.goto(url("/"));
     await page.getByRole("heading", { name: "Assessment input" }).waitFor();
     expect(await seriousAxeViolations(page)).toEqual([]);
-    await typeInto("Water/binder ratio", "0.95");
+    await typeInto(/^Water\/binder ratio/, "0.95");
     await page.getByRole("button", { name: "Run the assessment" }).click();
     const summary = page.locator(".error-summary");
     await summary.waitFor();

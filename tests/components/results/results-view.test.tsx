@@ -1,0 +1,43 @@
+// @vitest-environment jsdom
+import { describe, it, expect, afterEach, beforeAll } from "vitest";
+import { cleanup, render, screen } from "@testing-library/react";
+import { ResultsView } from "../../../components/results/results-view";
+import { cautionTextsFor } from "../../../lib/advisory/cautions";
+
+beforeAll(() => {
+  globalThis.ResizeObserver ??= class {
+    observe() {}
+    unobserve() {}
+    disconnect() {}
+  } as unknown as typeof ResizeObserver;
+});
+afterEach(cleanup);
+
+const result = {
+  versions: { dataset: "d1", engine: "0.1.0" },
+  flags: [
+    { id: "gypsum-formation", severity: "info", title: "Gypsum may form", explanation: "e", basis: "b", actions: [] },
+    { id: "sulfate-attack", severity: "warning", title: "Sulfate attack", explanation: "e", basis: "b", actions: ["Use a sulfate-resisting binder"] },
+  ],
+  cautions: ["Caution one"],
+  assemblage: { phases: [{ id: "C-S-H", volumeCm3: 20 }], poreSolutionCm3: 8, pH: 13.2 },
+  curing: { temperature: { timesH: [0, 10], coreC: [20, 40], surfaceC: [20, 30], peakCoreC: 40, maxDifferenceC: 10 } },
+};
+
+describe("results view", () => {
+  it("puts the flags first, most severe first, then the cautions, key figures and charts", () => {
+    render(<ResultsView result={result} />);
+    const headings = screen.getAllByRole("heading").map((h) => h.textContent);
+    expect(headings.slice(0, 3)).toEqual(["Results", "Risk flags", expect.stringContaining("Warning")]);
+    expect(headings.indexOf(headings.find((h) => h?.includes("Warning"))!)).toBeLessThan(headings.indexOf(headings.find((h) => h?.includes("Information"))!));
+    expect(screen.getByText("Caution one")).toBeTruthy();
+    expect(screen.getByText("Peak core temperature")).toBeTruthy();
+    expect(screen.getByRole("heading", { name: "Phase volumes of the hydrate assemblage" })).toBeTruthy();
+    expect(screen.getByRole("heading", { name: "Element temperature" })).toBeTruthy();
+  });
+
+  it("always shows the cautions, the standard assessment ones when the result carries none", () => {
+    render(<ResultsView result={{ flags: [] }} />);
+    for (const text of cautionTextsFor("assessment")) expect(screen.getByText(text)).toBeTruthy();
+  });
+});

@@ -102,7 +102,12 @@ function drawFooters(doc: Doc, model: ReportModel): void {
     const width = contentWidth(doc);
     const top = doc.page.height - PAGE.footerPt + 8;
     doc.moveTo(left, top - 4).lineTo(left + width, top - 4).lineWidth(0.5).strokeColor("#000").stroke();
-    doc.font("Helvetica").fontSize(5.6).fillColor("#333").text(text, left, top, { width, align: "justify", height: PAGE.footerPt - 30 });
+    // The whole caution text must fit the footer: shrink the type (down to 4 pt) rather than cut it.
+    const available = PAGE.footerPt - 30;
+    let size = 5.6;
+    doc.font("Helvetica");
+    while (size > 4 && doc.fontSize(size).heightOfString(text, { width, align: "justify" }) > available) size -= 0.2;
+    doc.fontSize(size).fillColor("#333").text(text, left, top, { width, align: "justify" });
     doc.fontSize(6.5).fillColor("#000").text(pdfSafe(`${model.title} · data set ${model.versions.dataset} · engine ${model.versions.engine} · page ${i - range.start + 1} of ${range.count}`), left, doc.page.height - 22, { width, align: "center", lineBreak: false });
     doc.page.margins.bottom = savedBottom;
   }

@@ -58,3 +58,17 @@ describe("pdfSafe", () => {
     expect(pdfSafe("漢")).toBe("?");
   });
 });
+
+describe("renderPdfReport with the full standard cautions", () => {
+  it("fits every standard caution text, whole, in the footer of each page", async () => {
+    const { cautionTextsFor } = await import("../../lib/advisory/cautions");
+    const cautions = [...cautionTextsFor("assessment"), ...cautionTextsFor("monte-carlo").slice(-1), ...cautionTextsFor("carbonation-depth").slice(-1)];
+    const saved = { ...sampleSaved, result: { ...(sampleSaved.result as object), cautions } };
+    const pdf = await renderPdfReport(buildReportModel({ saved, running, datasetFiles: sampleFiles, charts: sampleCharts }), { compress: false });
+    const text = shownText(pdf).replace(/\s+/g, " ");
+    const pages = pageCount(pdf);
+    // The last words of the last caution appear once per page: nothing was cut off.
+    const ending = pdfSafe(cautions[cautions.length - 1]).slice(-40).replace(/\s+/g, " ");
+    expect(text.split(ending).length - 1).toBe(pages);
+  });
+});

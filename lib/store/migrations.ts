@@ -27,6 +27,13 @@ export const MIGRATIONS: readonly Migration[] = [
     name: "index assessments by update time",
     sql: `CREATE INDEX assessments_updated_at ON assessments (updated_at DESC)`,
   },
+  {
+    version: 3,
+    name: "project name column for the list (backfilled from the inputs)",
+    sql: `ALTER TABLE assessments ADD COLUMN project_name TEXT;
+      UPDATE assessments SET project_name = json_extract(inputs_json, '$.project.name')
+        WHERE json_valid(inputs_json) AND json_type(inputs_json, '$.project.name') = 'text'`,
+  },
 ];
 
 export type MigrationReport = { applied: number[]; currentVersion: number };

@@ -2,7 +2,7 @@ import { randomUUID } from "node:crypto";
 import { mkdirSync } from "node:fs";
 import path from "node:path";
 import Database from "better-sqlite3";
-import { checkName, currency, projectNameOf, type AssessmentStore, type SavedAssessment, type StoreOutcome, type Versions } from "./assessment-store";
+import { checkName, currency, projectNameOf, type AssessmentStore, type AssessmentSummary, type SavedAssessment, type StoreOutcome, type Versions } from "./assessment-store";
 import { checkCompareIds, compareAssessments } from "./compare";
 import { applyMigrations } from "./migrations";
 
@@ -15,16 +15,16 @@ export function databasePath(env: Record<string, string | undefined> = process.e
   return configured ? configured : DEFAULT_DATABASE_PATH;
 }
 
-type Row = {
+type SummaryRow = {
   id: string;
   name: string;
-  inputs_json: string;
-  result_json: string;
+  project_name: string | null;
   dataset_version: string;
   engine_version: string;
   created_at: string;
   updated_at: string;
 };
+type Row = SummaryRow & { inputs_json: string; result_json: string };
 
 export type SqliteStoreOptions = {
   /** File path or `:memory:`; default `databasePath()`. The directory is created on demand. */
@@ -56,14 +56,30 @@ class SqliteAssessmentStore implements AssessmentStore {
     private readonly newId: () => string,
   ) {
     this.statements = {
-      list: db.prepare(`SELECT * FROM assessments ORDER BY updated_at DESC, created_at DESC, id`),
+      // The list reads no inputs or results: a store of large Monte Carlo results lists quickly.
+      list: db.prepare(
+        `SELECT id, name, project_name, dataset_version, engine_version, created_at, updated_at FROM assessments ORDER BY updated_at DESC, created_at DESC, id`,
+      ),
       get: db.prepare(`SELECT * FROM assessments WHERE id = ?`),
       insert: db.prepare(
-        `INSERT INTO assessments (id, name, inputs_json, result_json, dataset_version, engine_version, created_at, updated_at)
-         VALUES (@id, @name, @inputs_json, @result_json, @dataset_version, @engine_version, @created_at, @updated_at)`,
+        `INSERT INTO assessments (id, name, project_name, inputs_json, result_json, dataset_version, engine_version, created_at, updated_at)
+         VALUES (@id, @name, @project_name, @inputs_json, @result_json, @dataset_version, @engine_version, @created_at, @updated_at)`,
       ),
       rename: db.prepare(`UPDATE assessments SET name = ?, updated_at = ? WHERE id = ?`),
       remove: db.prepare(`DELETE FROM assessments WHERE id = ?`),
+    };
+  }
+
+  private toSummary(row: SummaryRow): AssessmentSummary {
+    const versions = { dataset: row.dataset_version, engine: row.engine_version };
+    return {
+      id: row.id,
+      name: row.name,
+      projectName: row.project_name,
+      createdAt: row.created_at,
+      updatedAt: row.updated_at,
+      versions,
+      ...currency(versions, this.running),
     };
   }
 
@@ -76,21 +92,7 @@ class SqliteAssessmentStore implements AssessmentStore {
     } catch {
       return { ok: false, error: { code: "invalid_record", message: `saved assessment ${row.id} holds unreadable JSON` } };
     }
-    const versions = { dataset: row.dataset_version, engine: row.engine_version };
-    return {
-      ok: true,
-      value: {
-        id: row.id,
-        name: row.name,
-        projectName: projectNameOf(inputs),
-        createdAt: row.created_at,
-        updatedAt: row.updated_at,
-        versions,
-        ...currency(versions, this.running),
-        inputs,
-        result,
-      },
-    };
+    return { ok: true, value: { ...this.toSummary(row), projectName: row.project_name ?? projectNameOf(inputs), inputs, result } };
   }
 
   private notFound(id: string): { ok: false; error: { code: "not_found"; id: string; message: string } } {
@@ -98,15 +100,8 @@ class SqliteAssessmentStore implements AssessmentStore {
   }
 
   list() {
-    const rows = this.statements.list.all() as Row[];
-    const summaries = [];
-    for (const row of rows) {
-      const saved = this.toSaved(row);
-      if (!saved.ok) continue; // an unreadable record is skipped in the list, reported when opened
-      const { inputs: _inputs, result: _result, ...summary } = saved.value;
-      summaries.push(summary);
-    }
-    return { ok: true as const, value: summaries };
+    const rows = this.statements.list.all() as SummaryRow[];
+    return { ok: true as const, value: rows.map((row) => this.toSummary(row)) };
   }
 
   get(id: string) {
@@ -126,6 +121,7 @@ class SqliteAssessmentStore implements AssessmentStore {
     this.statements.insert.run({
       id,
       name: checked.value,
+      project_name: projectNameOf(inputs),
       inputs_json: inputsJson,
       result_json: resultJson,
       dataset_version: versions.dataset,

@@ -37,9 +37,21 @@ describe("applyMigrations", () => {
 
   it("rolls back a failing migration so that it is not recorded", () => {
     const db = new Database(":memory:");
-    const broken = [...MIGRATIONS, { version: 3, name: "broken", sql: "CREATE TABLE assessments (id TEXT)" }];
+    const broken = [...MIGRATIONS, { version: 99, name: "broken", sql: "CREATE TABLE assessments (id TEXT)" }];
     expect(() => applyMigrations(db, broken)).toThrow();
     const versions = (db.prepare("SELECT version FROM schema_migrations").all() as { version: number }[]).map((r) => r.version);
-    expect(versions).toEqual([1, 2]);
+    expect(versions).toEqual(MIGRATIONS.map((m) => m.version));
+  });
+
+  it("backfills the project name of records saved before migration 3 from their inputs", () => {
+    const db = new Database(":memory:");
+    applyMigrations(db, MIGRATIONS.slice(0, 2));
+    const insert = db.prepare("INSERT INTO assessments VALUES (?, 'n', ?, '{}', 'd', 'e', 't', 't')");
+    insert.run("with", JSON.stringify({ project: { name: "Harbour" } }));
+    insert.run("without", JSON.stringify({ mix: {} }));
+    insert.run("numeric", JSON.stringify({ project: { name: 5 } }));
+    applyMigrations(db);
+    const names = db.prepare("SELECT id, project_name FROM assessments ORDER BY id").all();
+    expect(names).toEqual([{ id: "numeric", project_name: null }, { id: "with", project_name: "Harbour" }, { id: "without", project_name: null }]);
   });
 });

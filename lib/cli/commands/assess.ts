@@ -1,0 +1,30 @@
+import { runAssessment } from "../../service/assess";
+import { readJsonInput } from "../read-input";
+
+export const summary = "durability assessment: assemblage, scenarios, exposure classes, flags and cautions";
+
+/**
+ * `npm run cli -- assess --input FILE.json` prints `{ assemblage, scenarios, exposureClasses, compliance,
+ * flags, cautions, ... }` (input schema: `npm run cli -- schema assess`). Exit 2 naming the field on bad
+ * input, 1 when a computation fails.
+ */
+export async function run(args: string[]): Promise<number> {
+  const input = readJsonInput(args);
+  if (!input.ok) {
+    process.stderr.write(`${input.message}\n`);
+    return 2;
+  }
+  const outcome = await runAssessment(input.value, {
+    onProgress: args.includes("--progress") ? (f) => process.stderr.write(`progress ${(100 * f).toFixed(0)} %\n`) : undefined,
+  });
+  if (!outcome.ok) {
+    if (outcome.error.kind === "validation") {
+      for (const issue of outcome.error.issues) process.stderr.write(`${issue.path}: ${issue.message}\n`);
+      return 2;
+    }
+    process.stderr.write(`${outcome.error.code}: ${outcome.error.message}\n`);
+    return 1;
+  }
+  process.stdout.write(JSON.stringify(outcome.value, null, 2) + "\n");
+  return 0;
+}

@@ -1,0 +1,196 @@
+import packageJson from "../../package.json";
+import { binderSystemFromInput } from "../cement/binder-system";
+import { hydratePaste, type HydratedPaste } from "../cement/hydrate-paste";
+import { hydrationTimeline, type TimelineEntry } from "../cement/hydration-timeline";
+import { cautionTextsFor } from "../advisory/cautions";
+import { classifyExposure, type ExposureClassification } from "../advisory/exposure-classes";
+import { checkCompliance, type ComplianceResult } from "../advisory/exposure-compliance";
+import { sortFlags, type Flag } from "../advisory/flag";
+import { carbonationDepassivationFlag } from "../advisory/flag-rules/carbonation-depassivation";
+import { gypsumFormationFlag } from "../advisory/flag-rules/gypsum-formation";
+import { lowAlkalinityReserveFlag } from "../advisory/flag-rules/low-alkalinity-reserve";
+import { magnesiumSulfateAttackFlag } from "../advisory/flag-rules/magnesium-sulfate-attack";
+import { severeSulfateExposure, sulfateAttackFlag } from "../advisory/flag-rules/sulfate-attack";
+import { adviseCuring, type CuringAdvice } from "../curing/advise-curing";
+import { loadDataset, type Dataset } from "../data/load-dataset";
+import { describeFailure } from "../equilibrium/failure";
+import { phaseIds } from "../equilibrium/equilibrate";
+import { carbonationScenario, type CarbonationScenario } from "../scenarios/carbonation";
+import { sulfateIngress, type SulfateScenario } from "../scenarios/sulfate-ingress";
+import type { ScenarioBase } from "../scenarios/sweep";
+import { assessInput, binderInputOf, type AssessInput } from "../schema/assess-input";
+import { formatIssues } from "../schema/format-issues";
+import { domainError, validationError, type ServiceOutcome } from "./outcome";
+import { sampleDataset } from "./perturbed-dataset";
+import { summarise, flagRobustness } from "../advisory/sample-statistics";
+import { createRng } from "../advisory/random";
+
+export type AssessmentScenarios = {
+  sulfate?: SulfateScenario;
+  carbonation?: CarbonationScenario;
+};
+
+export type AssessmentResult = {
+  inputs: AssessInput;
+  assemblage: {
+    temperatureC: number;
+    paste: Omit<HydratedPaste, "assemblage"> & { assemblage: Omit<HydratedPaste["assemblage"], "state"> };
+    timeline: TimelineEntry[];
+  };
+  scenarios: AssessmentScenarios;
+  exposureClasses: ExposureClassification;
+  compliance: ComplianceResult;
+  curing?: CuringAdvice;
+  flags: Flag[];
+  uncertainty?: {
+    samples: number;
+    seed: number;
+    /** Phase id → P5/P50/P95 of its volume, cm³ per 100 g binder. */
+    phaseVolumesCm3: Record<string, { p5: number; p50: number; p95: number; mean: number }>;
+    failedSamples: number;
+  };
+  cautions: string[];
+  warnings: { code: string; [key: string]: unknown }[];
+  versions: { dataset: string; engine: string };
+};
+
+/** Sweep points of the Monte Carlo samples (each sample reruns every scenario; fewer points keep it tractable). */
+const MONTE_CARLO_SWEEP_POINTS = 8;
+
+type Deterministic = Omit<AssessmentResult, "inputs" | "uncertainty" | "cautions" | "versions">;
+
+/** Everything for one data set: the base assemblage, the scenarios and their flags. */
+function assessWithDataset(input: AssessInput, dataset: Dataset, points: number, withTimeline: boolean): ServiceOutcome<Deterministic> {
+  const system = binderSystemFromInput(binderInputOf(input));
+  if (!system.ok) {
+    const error = system.error;
+    if (error.code === "invalid_input") return validationError(error.issues.map((i) => ({ ...i, path: i.path.startsWith("cement") || i.path.startsWith("supplementaryMaterials") ? `binder.${i.path}` : i.path })));
+    return domainError(error.code, JSON.stringify(error));
+  }
+  const temperatureC = input.age.mode === "age" ? input.age.curingTemperatureC : 20;
+  const overrides = { suppress: input.options.suppressedPhases, enable: input.options.allowedPhases, dataset };
+  const paste = hydratePaste(system.value.composition, { temperatureC, binderContentKgPerM3: input.mix.binderContentKgPerM3, ...overrides });
+  if (!paste.ok) return domainError(paste.error.code, describeFailure(paste.error));
+  let timeline: TimelineEntry[] = [];
+  if (withTimeline) {
+    const series = hydrationTimeline(system.value.binder, { temperatureC, points, firstAgeDays: 1 / 24, lastAgeDays: 3650, ...overrides });
+    if (!series.ok) return domainError(series.error.code, describeFailure(series.error));
+    timeline = series.value.entries;
+  }
+  const exposure = input.exposure;
+  const serviceTemperatureC =
+    typeof exposure.serviceTemperatureC === "number" ? exposure.serviceTemperatureC : exposure.serviceTemperatureC ? (exposure.serviceTemperatureC.minC + exposure.serviceTemperatureC.maxC) / 2 : 20;
+  const base: ScenarioBase = {
+    composition: system.value.composition,
+    temperatureC: Math.min(100, Math.max(0, serviceTemperatureC)),
+    binderContentKgPerM3: input.mix.binderContentKgPerM3,
+    suppress: input.options.suppressedPhases,
+    enable: input.options.allowedPhases,
+    dataset,
+  };
+  const scenarios: AssessmentScenarios = {};
+  const flags: Flag[] = [];
+  const context = { exposure, waterBinderRatio: input.mix.waterBinderRatio, curingMaxTemperatureC: input.curing.maxTemperatureC };
+
+  if (severeSulfateExposure(exposure).any || (exposure.sulfateMgPerL ?? 0) > 0) {
+    const sulfate = sulfateIngress(base, exposure, { points });
+    if (!sulfate.ok) return domainError(sulfate.error.code, `sulfate scenario at ${sulfate.error.dose} mol: ${describeFailure(sulfate.error)}`);
+    scenarios.sulfate = sulfate.value;
+    for (const flag of [sulfateAttackFlag(sulfate.value, context), gypsumFormationFlag(sulfate.value), magnesiumSulfateAttackFlag(sulfate.value)]) if (flag) flags.push(flag);
+  }
+  const carbonation = carbonationScenario(base, exposure, { points, coverMm: input.project?.element?.coverMm });
+  if (!carbonation.ok) return domainError(carbonation.error.code, `carbonation scenario: ${describeFailure(carbonation.error)}`);
+  scenarios.carbonation = carbonation.value;
+  const depassivation = carbonationDepassivationFlag(carbonation.value, { exposure: { ...exposure, coverMm: exposure.coverMm ?? input.project?.element?.coverMm } });
+  if (depassivation) flags.push(depassivation);
+  const reserve = lowAlkalinityReserveFlag({ portlanditeKgPerM3: paste.value.perM3.portlanditeKg, carbonatableCaMolPerM3: paste.value.perM3.carbonatableCaMol, pH: paste.value.poreSolution?.pH ?? null });
+  if (reserve) flags.push(reserve);
+
+  const exposureClasses = classifyExposure(exposure);
+  const compliance = checkCompliance({ waterBinderRatio: input.mix.waterBinderRatio, binderContentKgPerM3: input.mix.binderContentKgPerM3 }, exposureClasses);
+  flags.push(...compliance.flags);
+
+  let curing: CuringAdvice | undefined;
+  if (input.curing.thermal) {
+    curing = adviseCuring(input.curing.thermal);
+    flags.push(...curing.flags);
+  }
+  const { state: _state, ...assemblageWithoutState } = paste.value.assemblage;
+  return {
+    ok: true,
+    value: {
+      assemblage: { temperatureC, paste: { ...paste.value, assemblage: assemblageWithoutState }, timeline },
+      scenarios,
+      exposureClasses,
+      compliance,
+      curing,
+      flags: sortFlags(flags),
+      warnings: [...paste.value.warnings] as AssessmentResult["warnings"],
+    },
+  };
+}
+
+/**
+ * The assessment behind `assess` (CLI) and `POST /api/v1/assess`: base assemblage at the given age,
+ * durability scenarios for the exposure, exposure classes and compliance, the curing advice when the
+ * thermal model is given, flags ordered by severity, and the cautions. With `options.monteCarlo`, the data
+ * set's uncertainties are sampled (seeded) and each flag reports how often it fires.
+ */
+export async function runAssessment(
+  raw: unknown,
+  options: { signal?: AbortSignal; onProgress?: (fraction: number) => void } = {},
+): Promise<ServiceOutcome<AssessmentResult>> {
+  const parsed = assessInput.safeParse(raw);
+  if (!parsed.success) return validationError(formatIssues(parsed.error));
+  const input = parsed.data;
+  const loaded = loadDataset();
+  if (!loaded.ok) return domainError("dataset_invalid", `${loaded.error.file}: ${loaded.error.message}`);
+  const known = phaseIds(loaded.value);
+  for (const field of ["suppressedPhases", "allowedPhases"] as const) {
+    const index = input.options[field].findIndex((id) => !known.has(id));
+    if (index >= 0) return validationError([{ path: `options.${field}.${index}`, message: `unknown phase id "${input.options[field][index]}"` }]);
+  }
+  const deterministic = assessWithDataset(input, loaded.value, input.options.sweepPoints, true);
+  if (!deterministic.ok) return deterministic;
+  const result: AssessmentResult = {
+    inputs: input,
+    ...deterministic.value,
+    cautions: cautionTextsFor(input.options.monteCarlo ? "monte-carlo" : "assessment"),
+    versions: { dataset: loaded.value.version, engine: packageJson.version },
+  };
+  options.onProgress?.(input.options.monteCarlo ? 0.05 : 1);
+  if (input.options.monteCarlo) {
+    const { samples, seed } = input.options.monteCarlo;
+    const volumes: Record<string, number[]> = {};
+    const fired: Record<string, boolean[]> = {};
+    let failed = 0;
+    for (let i = 0; i < samples; i++) {
+      if (options.signal?.aborted) return domainError("cancelled", `cancelled after ${i} of ${samples} samples`, { completedSamples: i });
+      const sampled = sampleDataset(loaded.value, createRng(seed, i));
+      const run = assessWithDataset(input, sampled, MONTE_CARLO_SWEEP_POINTS, false);
+      if (!run.ok) {
+        failed++;
+        continue;
+      }
+      for (const [id, v] of Object.entries(run.value.assemblage.paste.volumes)) (volumes[id] ??= []).push(v);
+      const ids = new Set(run.value.flags.filter((f) => f.severity !== "info").map((f) => f.id));
+      for (const flag of result.flags) (fired[flag.id] ??= []).push(ids.has(flag.id));
+      options.onProgress?.(0.05 + (0.95 * (i + 1)) / samples);
+      // Let the event loop breathe so that progress polling and cancellation get through.
+      if (i % 5 === 4) await new Promise((resolve) => setImmediate(resolve));
+    }
+    result.uncertainty = {
+      samples,
+      seed,
+      failedSamples: failed,
+      phaseVolumesCm3: Object.fromEntries(
+        Object.entries(volumes).map(([id, values]) => {
+          const s = summarise(values);
+          return [id, { p5: s.p5, p50: s.p50, p95: s.p95, mean: s.mean }];
+        }),
+      ),
+    };
+    result.flags = sortFlags(result.flags.map((flag) => (fired[flag.id]?.length ? { ...flag, robustness: flagRobustness(fired[flag.id]) } : flag)));
+  }
+  return { ok: true, value: result };
+}

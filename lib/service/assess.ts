@@ -138,12 +138,12 @@ function assessWithDataset(input: AssessInput, dataset: Dataset, points: number,
  */
 export async function runAssessment(
   raw: unknown,
-  options: { signal?: AbortSignal; onProgress?: (fraction: number) => void } = {},
+  options: { signal?: AbortSignal; onProgress?: (fraction: number) => void; dataset?: Dataset } = {},
 ): Promise<ServiceOutcome<AssessmentResult>> {
   const parsed = assessInput.safeParse(raw);
   if (!parsed.success) return validationError(formatIssues(parsed.error));
   const input = parsed.data;
-  const loaded = loadDataset();
+  const loaded = options.dataset ? { ok: true as const, value: options.dataset } : loadDataset();
   if (!loaded.ok) return domainError("dataset_invalid", `${loaded.error.file}: ${loaded.error.message}`);
   const known = phaseIds(loaded.value);
   for (const field of ["suppressedPhases", "allowedPhases"] as const) {

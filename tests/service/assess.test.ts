@@ -1,0 +1,53 @@
+import { describe, expect, it } from "vitest";
+import { loadDataset } from "../../lib/data/load-dataset";
+import { runAssessment } from "../../lib/service/assess";
+
+const input = {
+  project: { name: "Invented test wall", element: { type: "wall", thicknessM: 0.3, coverMm: 35 } },
+  binder: { cement: { kind: "preset", presetId: "en197-cem-i" } },
+  mix: { waterBinderRatio: 0.5, binderContentKgPerM3: 340 },
+  age: { mode: "age", ageDays: 28, curingTemperatureC: 20 },
+  exposure: { sulfateMgPerL: 1200, sulfateCation: "Na", relativeHumidityPercent: 70, wetting: "wet-dry", coverMm: 35 },
+  options: { sweepPoints: 8 },
+};
+
+describe("runAssessment", () => {
+  it("returns the documented keys, flags by severity and the cautions", async () => {
+    const r = await runAssessment(input);
+    if (!r.ok) throw new Error(JSON.stringify(r.error));
+    for (const key of ["assemblage", "scenarios", "exposureClasses", "flags", "cautions"]) expect(r.value).toHaveProperty(key);
+    expect(r.value.cautions.join(" ")).toMatch(/guide/);
+    const rank = { warning: 0, caution: 1, info: 2 } as const;
+    const order = r.value.flags.map((f) => rank[f.severity]);
+    expect([...order].sort((a, b) => a - b)).toEqual(order);
+    expect(r.value.versions.dataset).toMatch(/^[0-9a-f]{16}$/);
+  });
+
+  it("rejects bad input with field paths", async () => {
+    const r = await runAssessment({ ...input, mix: { waterBinderRatio: 0.1, binderContentKgPerM3: 340 } });
+    expect(r.ok).toBe(false);
+    if (!r.ok && r.error.kind === "validation") expect(r.error.issues[0].path).toBe("mix.waterBinderRatio");
+  });
+
+  it("gives identical Monte Carlo results for the same seed", async () => {
+    const mc = { ...input, options: { sweepPoints: 8, monteCarlo: { samples: 10, seed: 7 } } };
+    const [a, b] = await Promise.all([runAssessment(mc), runAssessment(mc)]);
+    if (!a.ok || !b.ok) throw new Error();
+    expect(a.value.uncertainty).toEqual(b.value.uncertainty);
+    expect(a.value.flags.map((f) => f.robustness)).toEqual(b.value.flags.map((f) => f.robustness));
+  }, 240_000);
+
+  it("makes every sample equal the deterministic result when the uncertainties are zero", async () => {
+    const dataset = loadDataset();
+    if (!dataset.ok) throw new Error();
+    const certain = { ...dataset.value, species: dataset.value.species.map((s) => ({ ...s, uncertaintyLog10K: 0 })), version: `${dataset.value.version}-certain` };
+    const r = await runAssessment({ ...input, options: { sweepPoints: 8, monteCarlo: { samples: 10, seed: 1 } } }, { dataset: certain });
+    if (!r.ok) throw new Error(JSON.stringify(r.error));
+    for (const [id, v] of Object.entries(r.value.assemblage.paste.volumes)) {
+      const u = r.value.uncertainty!.phaseVolumesCm3[id];
+      expect(u.p5, id).toBeCloseTo(v, 10);
+      expect(u.p95, id).toBeCloseTo(v, 10);
+    }
+    for (const flag of r.value.flags.filter((f) => f.severity !== "info")) expect(flag.robustness?.firedFraction).toBe(1);
+  }, 240_000);
+});

@@ -1,0 +1,11 @@
+import { assessmentJobs } from "@/lib/service/assess-jobs";
+import { guarded, outcomeResponse, routeParam } from "@/lib/service/http";
+
+export const runtime = "nodejs";
+export const dynamic = "force-dynamic";
+
+/** GET: progress (0–1), state and, once succeeded, the result. */
+export const GET = guarded(async (_request, context) => outcomeResponse(assessmentJobs().status(await routeParam(context, "id"))));
+
+/** DELETE: cancel (the computation stops at its next check of the AbortSignal). */
+export const DELETE = guarded(async (_request, context) => outcomeResponse(assessmentJobs().cancel(await routeParam(context, "id"))));

@@ -7,17 +7,26 @@ import type { Flag } from "../advisory/flag";
  */
 export type KeyFigure = { id: string; label: string; unit: string; value: number | string };
 
-type FigureDefinition = { id: string; label: string; unit: string; paths: string[][] };
+type FigureDefinition = { id: string; label: string; unit: string; paths: string[][]; scale?: number };
 
-/** Where the key figures sit in an assessment result (first path that holds a number or text wins). */
+/**
+ * Where the key figures sit in an assessment result (`lib/service/assess.ts`; first path that holds a
+ * number or text wins; `scale` converts, e.g. a fraction to per cent).
+ */
 const FIGURES: readonly FigureDefinition[] = [
-  { id: "pH", label: "Pore solution pH", unit: "", paths: [["assemblage", "pH"], ["assemblage", "poreSolution", "pH"], ["assemblage", "equilibrium", "pH"]] },
-  { id: "porosity", label: "Capillary porosity", unit: "vol %", paths: [["assemblage", "porosityVolumePercent"], ["assemblage", "capillaryPorosityVolumePercent"], ["assemblage", "volumes", "capillaryPorosityVolumePercent"]] },
-  { id: "portlandite", label: "Portlandite", unit: "vol %", paths: [["assemblage", "portlanditeVolumePercent"]] },
-  { id: "peakTemperature", label: "Peak core temperature", unit: "°C", paths: [["curing", "temperature", "peakCoreC"], ["curing", "peakCoreC"], ["temperatureHistory", "peakCoreC"]] },
+  { id: "pH", label: "Pore solution pH", unit: "", paths: [["assemblage", "paste", "poreSolution", "pH"], ["assemblage", "pH"]] },
+  { id: "capillaryPorosity", label: "Capillary porosity of the paste", unit: "% of paste volume", paths: [["assemblage", "paste", "porosity", "capillaryFraction"]], scale: 100 },
+  { id: "portlandite", label: "Portlandite", unit: "kg/m³ concrete", paths: [["assemblage", "paste", "perM3", "portlanditeKg"]] },
+  { id: "boundWater", label: "Bound water", unit: "kg/m³ concrete", paths: [["assemblage", "paste", "perM3", "boundWaterKg"]] },
+  { id: "sulfateSolidVolumeIncrease", label: "Largest solid-volume gain under sulfate (of initial pores)", unit: "%", paths: [["scenarios", "sulfate", "summary", "maximumSolidVolumeIncreasePercentOfPores"]] },
+  { id: "portlanditeExhaustedSulfate", label: "Sulfate dose that exhausts portlandite", unit: "mmol SO4/100 g binder", paths: [["scenarios", "sulfate", "summary", "portlanditeExhaustedDoseMmolPer100g"]] },
+  { id: "co2BindingCapacity", label: "CO2 binding capacity", unit: "mol/m³ concrete", paths: [["scenarios", "carbonation", "summary", "co2BindingCapacityMolPerM3"]] },
+  { id: "carbonationCoefficient", label: "Carbonation coefficient", unit: "mm/√year", paths: [["scenarios", "carbonation", "depth", "coefficientMmPerSqrtYear"]] },
+  { id: "carbonationTimeToCover", label: "Time for carbonation to reach the cover", unit: "years", paths: [["scenarios", "carbonation", "depth", "timeToCoverYears"]] },
+  { id: "peakTemperature", label: "Peak core temperature", unit: "°C", paths: [["curing", "temperature", "peakCoreC"]] },
   { id: "maxDifference", label: "Largest core–surface difference", unit: "°C", paths: [["curing", "temperature", "maxDifferenceC"]] },
   { id: "minimumCuring", label: "Minimum curing period", unit: "d", paths: [["curing", "minimumCuringDays"]] },
-  { id: "carbonationDepth", label: "Carbonation depth at service life", unit: "mm", paths: [["carbonation", "depthMm"], ["scenarios", "carbonation", "depthAtServiceLifeMm"]] },
+  { id: "monteCarloSamples", label: "Monte Carlo samples", unit: "", paths: [["uncertainty", "samples"]] },
 ];
 
 /** The value at a path of nested objects, or undefined. */
@@ -41,7 +50,7 @@ export function keyFigures(result: unknown): KeyFigure[] {
     for (const path of figure.paths) {
       const value = valueAt(result, path);
       if (isFigureValue(value)) {
-        out.push({ id: figure.id, label: figure.label, unit: figure.unit, value });
+        out.push({ id: figure.id, label: figure.label, unit: figure.unit, value: typeof value === "number" && figure.scale ? value * figure.scale : value });
         break;
       }
     }

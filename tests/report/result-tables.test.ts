@@ -1,0 +1,30 @@
+import { describe, expect, it } from "vitest";
+import { keyFigures } from "../../lib/report/key-figures";
+import { resultTables } from "../../lib/report/result-tables";
+import { demoResult } from "./real-result";
+
+describe("resultTables", () => {
+  it("lists every exposure class of both standards with its source, the limiting values and the pore solution", async () => {
+    const result = await demoResult();
+    const [classes, limits, solution] = resultTables(result);
+    expect(classes.title).toBe("Exposure classes");
+    expect(classes.rows).toHaveLength(result.exposureClasses.en206.classes.length + result.exposureClasses.aci318.classes.length);
+    expect(classes.rows.every((row) => row[4].length > 0)).toBe(true);
+    expect(limits.rows.some((row) => row[4] === "NOT MET")).toBe(result.compliance.en206.concat(result.compliance.aci318).some((c) => c.pass === false));
+    expect(solution.rows[0][0]).toBe("pH");
+  });
+
+  it("gives no table for a result without those parts", () => {
+    expect(resultTables({})).toEqual([]);
+  });
+});
+
+describe("keyFigures of a real assessment", () => {
+  it("reads the pH, porosity (as per cent) and portlandite content where the service puts them", async () => {
+    const result = await demoResult();
+    const figures = Object.fromEntries(keyFigures(result).map((f) => [f.id, f.value]));
+    expect(figures.pH).toBe(result.assemblage.paste.poreSolution!.pH);
+    expect(figures.capillaryPorosity).toBeCloseTo(result.assemblage.paste.porosity.capillaryFraction * 100, 12);
+    expect(figures.portlandite).toBe(result.assemblage.paste.perM3.portlanditeKg);
+  });
+});

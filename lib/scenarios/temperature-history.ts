@@ -1,0 +1,467 @@
+import { hydratePaste, type HydratedPaste } from "../cement/hydrate-paste";
+import { suppressedPhases } from "../data/kinetic-constraints";
+import { loadDataset, type Dataset } from "../data/load-dataset";
+import type { EquilibriumFailure } from "../equilibrium/failure";
+import type { SerializedState } from "../equilibrium/result";
+import { serviceTemperatureRangeC, type ExposureInput } from "../schema/exposure-input";
+import { linearDoses, phaseMoles, sweepPoint, type ScenarioBase, type ScenarioSweep, type SweepFailure, type SweepPoint } from "./sweep";
+
+/**
+ * Temperature history and delayed ettringite formation (DEF). The same bulk composition is equilibrated
+ * over a range of temperatures: ettringite is stable in a Portland paste at room temperature but not above
+ * a mix-dependent temperature, where its sulfate passes to AFm, the pore solution (and, in real pastes, the
+ * C-S-H) and can re-form ettringite after cooling, in the hardened paste (Taylor, Famy & Scrivener 2001,
+ * Cem. Concr. Res. 31, 683; Lothenbach, Winnefeld, Alder, Wieland & Lunk 2007, Cem. Concr. Res. 37, 483).
+ *
+ * What this model does and does not hold:
+ * - sulfate sorption on C-S-H is not in the data set: at high temperature the sulfate that leaves ettringite
+ *   goes to AFm, the pore solution or a calcium sulfate in the model, so `sulfateOutsideAft` is the whole of it;
+ * - hydrogarnets are suppressed below 50 °C by the default kinetic constraints (`lib/data/kinetic-constraints.json`),
+ *   so the assemblage changes step-wise at 50 °C;
+ * - the data set's ettringite is known to be too stable at high temperature (about 1.3 log10 units at 85 °C in
+ *   its own validation, traced to the constant Cp of Al(OH)4-): the computed stability temperature comes out
+ *   higher than the 65–75 °C reported for Portland pastes. It is reported as computed.
+ */
+
+/** Sweep range, °C, when the caller gives none: 5–95 °C covers service and steam/heat curing (common practice). */
+const DEFAULT_SWEEP_FROM_C = 5;
+const DEFAULT_SWEEP_TO_C = 95;
+/** The data set covers 0–100 °C (issue 3 scope); temperatures outside are refused. */
+const DATA_SET_MIN_C = 0;
+const DATA_SET_MAX_C = 100;
+/** Root-finding tolerance on temperature, °C, and iteration cap (a cap so nothing hangs). */
+const DEFAULT_TOLERANCE_C = 0.05;
+const DEFAULT_MAX_ITERATIONS = 40;
+/** Below this amount, mol per 100 g binder, a phase is counted absent (numerical dust of the solver). */
+const PRESENT_ABOVE_MOL = 1e-12;
+/**
+ * A warm-started solve can end with an allowed solid still supersaturated (a phase the minimiser left out after a
+ * failed addition). Results with a saturation index above this, log10 units, are re-solved cold.
+ */
+const SUPERSATURATION_TOLERANCE_LOG10 = 1e-3;
+/** Molar gas constant, J/(mol·K) (CODATA 2018, exact). */
+const GAS_CONSTANT_J_PER_MOL_K = 8.314462618;
+const KELVIN_OFFSET = 273.15;
+
+/** The AFt phases: where sulfate is held as ettringite. */
+const AFT_PHASE_IDS = ["ettringite", "fe-ettringite"] as const;
+
+export type TemperaturePoint = SweepPoint & {
+  ettringiteMol: number;
+  /** Saturation index (log10 Ω) of ettringite in the equilibrium assemblage (0 where it is present). */
+  ettringiteSaturationIndex: number;
+  /** Sulfate in the pore solution, mol SO3 per 100 g binder. */
+  dissolvedSulfateMolSO3: number;
+};
+
+export type StabilityLimit =
+  | { kind: "found"; temperatureC: number; iterations: number; bracketC: [number, number] }
+  /** The phase is present at every temperature of the sweep. */
+  | { kind: "stable-throughout"; upToC: number }
+  /** The phase is absent at every temperature of the sweep (e.g. too little sulfate or aluminium). */
+  | { kind: "absent-throughout"; fromC: number; toC: number };
+
+export type SulfateDistribution = {
+  /** Sulfate of the whole paste, mol SO3 per 100 g binder. */
+  totalMolSO3Per100gBinder: number;
+  /** Held in AFt (ettringite, Fe-ettringite). */
+  inAftMolSO3Per100gBinder: number;
+  /** Held elsewhere (AFm, pore solution, calcium sulfates, ...): what can form ettringite later. */
+  outsideAftMolSO3Per100gBinder: number;
+  outsideAftMolSO3PerM3: number;
+  /** Host → mol SO3 per 100 g binder; `pore-solution` for the dissolved sulfate. */
+  byHostMolSO3Per100gBinder: Record<string, number>;
+};
+
+export type TemperatureState = {
+  temperatureC: number;
+  ettringiteMol: number;
+  ettringiteVolumeCm3: number;
+  /**
+   * Saturation index of ettringite in the assemblage equilibrated WITHOUT ettringite: positive where ettringite
+   * would form (it is then stable), negative where it is unstable. ΔrG of ettringite formation from the pore
+   * solution = −RT ln10 · SI, kJ per mol of Ca6Al2(SO4)3(OH)12·26H2O.
+   */
+  ettringiteSaturationIndexWithoutIt: number;
+  ettringiteFormationGibbsKJPerMol: number;
+  sulfate: SulfateDistribution;
+  pH: number | null;
+  phasesMol: Record<string, number>;
+};
+
+export type TemperatureHistoryResult = {
+  sweep: ScenarioSweep<TemperaturePoint>;
+  summary: {
+    serviceTemperatureC: number;
+    /** Null when no curing temperature was given. */
+    curingTemperatureC: number | null;
+    /** The temperature above which ettringite is no longer stable in this mix (null unless a limit was found). */
+    ettringiteStabilityTemperatureC: number | null;
+    stabilityLimit: StabilityLimit;
+    atService: TemperatureState;
+    atCuring: TemperatureState | null;
+    /** Sulfate that passes from AFm/solution into ettringite on cooling from curing to service, mol SO3 per 100 g binder and per m³. */
+    sulfateToEttringiteOnCoolingMolSO3Per100gBinder: number | null;
+    sulfateToEttringiteOnCoolingMolSO3PerM3: number | null;
+    /** Ettringite volume that forms on cooling, cm³ per 100 g binder and L per m³ of concrete. */
+    ettringiteVolumeGainOnCoolingCm3Per100gBinder: number | null;
+    ettringiteVolumeGainOnCoolingLitresPerM3: number | null;
+    /**
+     * Sweep temperatures where the warm-started result left an allowed solid supersaturated and was re-solved cold,
+     * and any supersaturation that remained (then the point is not a true equilibrium).
+     */
+    equilibriumChecks: { resolvedColdAtC: number[]; remainingSupersaturation: { temperatureC: number; phaseId: string; saturationIndex: number }[] };
+  };
+};
+
+export type TemperatureHistoryError =
+  | SweepFailure
+  | { code: "temperature_out_of_range"; field: string; temperatureC: number; minimumC: number; maximumC: number; message: string };
+
+export type TemperatureHistoryOptions = {
+  /** Points of the temperature sweep (the service and curing temperatures are added to them). */
+  points: number;
+  /** Maximum concrete temperature during curing, °C (`curing.maxTemperatureC`). */
+  curingMaxTemperatureC?: number;
+  sweepFromC?: number;
+  sweepToC?: number;
+  toleranceC?: number;
+  maxIterations?: number;
+};
+
+/** ΔrG of precipitation from the saturation index: ΔrG = −RT ln10 · SI, kJ/mol per formula unit. */
+export function formationGibbsKJPerMol(saturationIndex: number, temperatureC: number): number {
+  return (-GAS_CONSTANT_J_PER_MOL_K * (temperatureC + KELVIN_OFFSET) * Math.LN10 * saturationIndex) / 1000;
+}
+
+/** Representative service temperature for DEF: the mid-point of the range, or the base temperature. */
+function serviceTemperatureForDef(base: ScenarioBase, exposure: ExposureInput): number {
+  const range = serviceTemperatureRangeC(exposure);
+  return range ? (range.minC + range.maxC) / 2 : base.temperatureC;
+}
+
+/**
+ * Brent's method (Brent 1973, Algorithms for Minimization without Derivatives, ch. 4): inverse quadratic
+ * interpolation and secant steps, falling back to bisection so the bracket always shrinks. `f` may fail
+ * (an engine failure), which is passed back. Needs f(a)·f(b) ≤ 0; stops when the bracket is below `toleranceX`
+ * or after `maxIterations` evaluations.
+ */
+export function brentRoot<E>(
+  f: (x: number) => { ok: true; value: number } | { ok: false; error: E },
+  bracket: { a: number; b: number; fa: number; fb: number },
+  toleranceX: number,
+  maxIterations: number,
+): { ok: true; value: { x: number; iterations: number } } | { ok: false; error: E | { code: "no_sign_change"; fa: number; fb: number } } {
+  let { a, b, fa, fb } = bracket;
+  if (fa * fb > 0) return { ok: false, error: { code: "no_sign_change", fa, fb } };
+  if (fa === 0) return { ok: true, value: { x: a, iterations: 0 } };
+  if (fb === 0) return { ok: true, value: { x: b, iterations: 0 } };
+  let c = a;
+  let fc = fa;
+  let d = b - a;
+  let e = d;
+  for (let iteration = 1; iteration <= maxIterations; iteration++) {
+    if (fb * fc > 0) {
+      c = a;
+      fc = fa;
+      d = b - a;
+      e = d;
+    }
+    if (Math.abs(fc) < Math.abs(fb)) {
+      a = b; b = c; c = a;
+      fa = fb; fb = fc; fc = fa;
+    }
+    const tol = 2 * Number.EPSILON * Math.abs(b) + 0.5 * toleranceX;
+    const half = 0.5 * (c - b);
+    if (Math.abs(half) <= tol || fb === 0) return { ok: true, value: { x: b, iterations: iteration - 1 } };
+    if (Math.abs(e) >= tol && Math.abs(fa) > Math.abs(fb)) {
+      const s = fb / fa;
+      let p: number;
+      let q: number;
+      if (a === c) {
+        p = 2 * half * s; // secant
+        q = 1 - s;
+      } else {
+        const qa = fa / fc; // inverse quadratic interpolation
+        const r = fb / fc;
+        p = s * (2 * half * qa * (qa - r) - (b - a) * (r - 1));
+        q = (qa - 1) * (r - 1) * (s - 1);
+      }
+      if (p > 0) q = -q;
+      p = Math.abs(p);
+      if (2 * p < Math.min(3 * half * q - Math.abs(tol * q), Math.abs(e * q))) {
+        e = d;
+        d = p / q;
+      } else {
+        d = half;
+        e = d;
+      }
+    } else {
+      d = half;
+      e = d;
+    }
+    a = b;
+    fa = fb;
+    b += Math.abs(d) > tol ? d : Math.sign(half) * tol;
+    const next = f(b);
+    if (!next.ok) return next;
+    fb = next.value;
+  }
+  return { ok: true, value: { x: b, iterations: maxIterations } };
+}
+
+type PasteAt = (temperatureC: number, warm?: HydratedPaste) => { ok: true; value: HydratedPaste } | { ok: false; error: EquilibriumFailure };
+
+/** The most supersaturated allowed solid of a paste (suppressed phases excluded), or undefined if none exceeds the tolerance. */
+export function supersaturatedSolid(paste: HydratedPaste, base: Pick<ScenarioBase, "suppress" | "enable">, extraSuppressed: readonly string[] = []): { phaseId: string; saturationIndex: number } | undefined {
+  const suppressed = new Set([...suppressedPhases(paste.temperatureC, { enable: base.enable, suppress: base.suppress }), ...extraSuppressed]);
+  let worst: { phaseId: string; saturationIndex: number } | undefined;
+  for (const [phaseId, si] of Object.entries(paste.assemblage.saturationIndices)) {
+    if (suppressed.has(phaseId) || !(si > SUPERSATURATION_TOLERANCE_LOG10)) continue;
+    if (!worst || si > worst.saturationIndex) worst = { phaseId, saturationIndex: si };
+  }
+  return worst;
+}
+
+/**
+ * One equilibrium of the base plus additions at a temperature, with extra phases suppressed, warm-started from a
+ * neighbouring paste; re-solved cold when the warm-started result leaves an allowed solid supersaturated.
+ */
+export function pasteAtTemperature(base: ScenarioBase, addedElementsMol: Record<string, number>, extraSuppressed: readonly string[]): PasteAt {
+  const reacted = { ...base.composition.reactedElementsMol } as Record<string, number>;
+  for (const [element, mol] of Object.entries(addedElementsMol)) reacted[element] = (reacted[element] ?? 0) + mol;
+  const composition = { ...base.composition, reactedElementsMol: reacted as typeof base.composition.reactedElementsMol };
+  const solve = (temperatureC: number, warm?: HydratedPaste) => {
+    const warmStart: SerializedState | undefined = warm?.assemblage.state;
+    const alkaliBoundFraction = warm
+      ? Object.fromEntries(Object.entries(warm.alkaliInCshMol).map(([e, mol]) => [e, reacted[e] > 0 ? mol / reacted[e] : 0]))
+      : undefined;
+    return hydratePaste(composition, {
+      temperatureC,
+      binderContentKgPerM3: base.binderContentKgPerM3,
+      suppress: [...(base.suppress ?? []), ...extraSuppressed],
+      enable: base.enable,
+      warmStart,
+      alkaliBoundFraction,
+      dataset: base.dataset,
+    });
+  };
+  return (temperatureC, warm) => {
+    const first = solve(temperatureC, warm);
+    if (!first.ok || !warm) return first;
+    const left = supersaturatedSolid(first.value, base, extraSuppressed);
+    if (!left) return first;
+    const cold = solve(temperatureC);
+    if (!cold.ok) return first;
+    const after = supersaturatedSolid(cold.value, base, extraSuppressed);
+    return !after || after.saturationIndex < left.saturationIndex ? cold : first;
+  };
+}
+
+/**
+ * The temperature at which `phaseId` stops being stable, between a sweep temperature where it is present and a
+ * neighbouring one where it is absent. The function whose root is sought is the saturation index of the phase in
+ * the assemblage equilibrated without it: SI > 0 means the phase would precipitate (so it belongs to the stable
+ * assemblage), SI < 0 that it would dissolve. Unlike the amount, which can jump to zero at an invariant point,
+ * this index is continuous in temperature, so Brent's method converges on it. Each evaluation is warm-started
+ * from the nearest previous one.
+ */
+export function stabilityLimitTemperatureC(
+  pasteWithout: PasteAt,
+  phaseId: string,
+  present: { temperatureC: number; paste: HydratedPaste },
+  absent: { temperatureC: number; paste: HydratedPaste },
+  toleranceC: number,
+  maxIterations: number,
+): { ok: true; value: { temperatureC: number; iterations: number } } | { ok: false; error: EquilibriumFailure & { temperatureC: number } } {
+  const evaluated: HydratedPaste[] = [];
+  const nearest = (t: number): HydratedPaste => {
+    let best = Math.abs(present.temperatureC - t) <= Math.abs(absent.temperatureC - t) ? present.paste : absent.paste;
+    for (const p of evaluated) if (Math.abs(p.temperatureC - t) < Math.abs(best.temperatureC - t)) best = p;
+    return best;
+  };
+  const f = (t: number): { ok: true; value: number } | { ok: false; error: EquilibriumFailure & { temperatureC: number } } => {
+    const paste = pasteWithout(t, nearest(t));
+    if (!paste.ok) return { ok: false, error: { ...paste.error, temperatureC: t } };
+    evaluated.push(paste.value);
+    return { ok: true, value: paste.value.assemblage.saturationIndices[phaseId] ?? Number.NEGATIVE_INFINITY };
+  };
+  const fa = f(present.temperatureC);
+  if (!fa.ok) return fa;
+  const fb = f(absent.temperatureC);
+  if (!fb.ok) return fb;
+  // Present at a: SI without it ≥ 0 there; absent at b: SI ≤ 0. Clamp round-off so the bracket holds.
+  const root = brentRoot(f, { a: present.temperatureC, b: absent.temperatureC, fa: Math.max(fa.value, 0), fb: Math.min(fb.value, 0) }, toleranceC, maxIterations);
+  if (!root.ok) {
+    const error = root.error;
+    if ("code" in error && error.code === "no_sign_change")
+      return { ok: false, error: { code: "no_convergence", iterations: 0, residual: Math.abs(fa.value), activePhases: [], message: `no sign change of the ${phaseId} saturation index`, temperatureC: present.temperatureC } };
+    return { ok: false, error: error as EquilibriumFailure & { temperatureC: number } };
+  }
+  return { ok: true, value: { temperatureC: root.value.x, iterations: root.value.iterations } };
+}
+
+/** Sulfate per host phase (and the pore solution), mol SO3 per 100 g binder. */
+export function sulfateDistribution(paste: HydratedPaste, dataset: Dataset, binderContentKgPerM3: number): SulfateDistribution {
+  const sulfurOf = new Map(dataset.species.map((s) => [s.id, s.elements.S ?? 0]));
+  const byHost: Record<string, number> = {};
+  for (const phase of paste.assemblage.phases) {
+    const members = phase.members ?? [{ id: phase.id, moles: phase.moles }];
+    const mol = members.reduce((sum, m) => sum + (sulfurOf.get(m.id) ?? 0) * m.moles, 0);
+    if (mol > 0) byHost[phase.id] = mol;
+  }
+  const solution = paste.assemblage.solution;
+  if (solution && (solution.elementMolality.S ?? 0) > 0) byHost["pore-solution"] = solution.elementMolality.S * solution.waterKg;
+  const total = Object.values(byHost).reduce((a, b) => a + b, 0);
+  const inAft = AFT_PHASE_IDS.reduce((sum, id) => sum + (byHost[id] ?? 0), 0);
+  const outside = total - inAft;
+  return {
+    totalMolSO3Per100gBinder: total,
+    inAftMolSO3Per100gBinder: inAft,
+    outsideAftMolSO3Per100gBinder: outside,
+    // mol per 100 g binder × (B kg/m³ × 10 per 100 g) = mol/m³
+    outsideAftMolSO3PerM3: outside * binderContentKgPerM3 * 10,
+    byHostMolSO3Per100gBinder: byHost,
+  };
+}
+
+function temperatureState(paste: HydratedPaste, without: HydratedPaste, dataset: Dataset, binderContentKgPerM3: number): TemperatureState {
+  const si = without.assemblage.saturationIndices.ettringite ?? Number.NEGATIVE_INFINITY;
+  return {
+    temperatureC: paste.temperatureC,
+    ettringiteMol: phaseMoles(paste, "ettringite"),
+    ettringiteVolumeCm3: paste.volumes.ettringite ?? 0,
+    ettringiteSaturationIndexWithoutIt: si,
+    ettringiteFormationGibbsKJPerMol: formationGibbsKJPerMol(si, paste.temperatureC),
+    sulfate: sulfateDistribution(paste, dataset, binderContentKgPerM3),
+    pH: paste.poreSolution?.pH ?? null,
+    phasesMol: Object.fromEntries(paste.assemblage.phases.map((p) => [p.id, p.moles])),
+  };
+}
+
+function checkTemperature(field: string, temperatureC: number): TemperatureHistoryError | undefined {
+  if (Number.isFinite(temperatureC) && temperatureC >= DATA_SET_MIN_C && temperatureC <= DATA_SET_MAX_C) return undefined;
+  return {
+    code: "temperature_out_of_range",
+    field,
+    temperatureC,
+    minimumC: DATA_SET_MIN_C,
+    maximumC: DATA_SET_MAX_C,
+    message: `${field} must be between ${DATA_SET_MIN_C} and ${DATA_SET_MAX_C} °C, the range of the thermodynamic data set (got ${temperatureC})`,
+  };
+}
+
+/**
+ * The temperature-history scenario: a sweep of the assemblage against temperature, the assemblages at the
+ * service and maximum curing temperatures, the ettringite stability temperature of this mix (Brent's method on
+ * the engine), and the sulfate held outside ettringite at the curing temperature that could form ettringite later.
+ */
+export function temperatureHistory(
+  base: ScenarioBase,
+  exposure: ExposureInput,
+  options: TemperatureHistoryOptions,
+): { ok: true; value: TemperatureHistoryResult } | { ok: false; error: TemperatureHistoryError } {
+  const serviceC = serviceTemperatureForDef(base, exposure);
+  const curingC = options.curingMaxTemperatureC;
+  const fromC = options.sweepFromC ?? DEFAULT_SWEEP_FROM_C;
+  const toC = options.sweepToC ?? DEFAULT_SWEEP_TO_C;
+  for (const [field, t] of [["exposure.serviceTemperatureC", serviceC], ["curing.maxTemperatureC", curingC], ["options.sweepFromC", fromC], ["options.sweepToC", toC]] as const) {
+    if (t === undefined) continue;
+    const bad = checkTemperature(field, t);
+    if (bad) return { ok: false, error: bad };
+  }
+  if (!(toC > fromC)) return { ok: false, error: { code: "temperature_out_of_range", field: "options.sweepToC", temperatureC: toC, minimumC: fromC, maximumC: DATA_SET_MAX_C, message: `options.sweepToC must exceed options.sweepFromC (${fromC} °C)` } };
+  let dataset = base.dataset;
+  if (!dataset) {
+    const loaded = loadDataset();
+    if (!loaded.ok) return { ok: false, error: { code: "invalid_input", field: "dataset", message: loaded.error.message, dose: fromC } };
+    dataset = loaded.value;
+  }
+  const withData: ScenarioBase = { ...base, dataset };
+  const grid = linearDoses(toC - fromC, options.points).map((d) => fromC + d);
+  const temperatures = [...new Set([...grid, serviceC, ...(curingC === undefined ? [] : [curingC])])].sort((a, b) => a - b);
+  // The chain of warm-started equilibria, each checked: a warm start that leaves an allowed solid supersaturated
+  // is re-solved cold (see `pasteAtTemperature`), so a non-equilibrium state is never carried to the next point.
+  // (The generic `sweepPaste` warm-starts without this check; along this temperature path it carried such a state
+  // from the monosulfate hydrate transition near 28 °C to 95 °C.)
+  const plain = pasteAtTemperature(withData, {}, []);
+  const resolvedColdAtC: number[] = [];
+  const remainingSupersaturation: { temperatureC: number; phaseId: string; saturationIndex: number }[] = [];
+  const points: { dose: number; paste: HydratedPaste }[] = [];
+  let previous: HydratedPaste | undefined;
+  for (const t of temperatures) {
+    const solved = plain(t, previous);
+    if (!solved.ok) return { ok: false, error: { ...solved.error, dose: t } };
+    if (previous && !solved.value.assemblage.warmStarted) resolvedColdAtC.push(t);
+    const still = supersaturatedSolid(solved.value, withData);
+    if (still) remainingSupersaturation.push({ temperatureC: t, ...still });
+    points.push({ dose: t, paste: solved.value });
+    previous = solved.value;
+  }
+  const dissolvedSulfate = (paste: HydratedPaste) => (paste.assemblage.solution ? (paste.assemblage.solution.elementMolality.S ?? 0) * paste.assemblage.solution.waterKg : 0);
+  const chartPoints: TemperaturePoint[] = points.map(({ dose, paste }) => ({
+    ...sweepPoint(dose, paste),
+    ettringiteMol: phaseMoles(paste, "ettringite"),
+    ettringiteSaturationIndex: paste.assemblage.saturationIndices.ettringite ?? Number.NEGATIVE_INFINITY,
+    dissolvedSulfateMolSO3: dissolvedSulfate(paste),
+  }));
+
+  const withoutEttringite = pasteAtTemperature(withData, {}, ["ettringite"]);
+  const tolerance = options.toleranceC ?? DEFAULT_TOLERANCE_C;
+  const maxIterations = options.maxIterations ?? DEFAULT_MAX_ITERATIONS;
+  const isPresent = (paste: HydratedPaste) => phaseMoles(paste, "ettringite") > PRESENT_ABOVE_MOL;
+  let stabilityLimit: StabilityLimit;
+  const firstPresent = points.findIndex((p) => isPresent(p.paste));
+  if (firstPresent < 0) stabilityLimit = { kind: "absent-throughout", fromC: temperatures[0], toC: temperatures[temperatures.length - 1] };
+  else {
+    const lost = points.findIndex((p, i) => i > firstPresent && !isPresent(p.paste));
+    if (lost < 0) stabilityLimit = { kind: "stable-throughout", upToC: temperatures[temperatures.length - 1] };
+    else {
+      const present = { temperatureC: points[lost - 1].dose, paste: points[lost - 1].paste };
+      const absent = { temperatureC: points[lost].dose, paste: points[lost].paste };
+      const root = stabilityLimitTemperatureC(withoutEttringite, "ettringite", present, absent, tolerance, maxIterations);
+      if (!root.ok) return { ok: false, error: { ...root.error, dose: root.error.temperatureC } };
+      stabilityLimit = { kind: "found", temperatureC: root.value.temperatureC, iterations: root.value.iterations, bracketC: [present.temperatureC, absent.temperatureC] };
+    }
+  }
+
+  const at = (t: number) => points.find((p) => p.dose === t)!.paste;
+  const stateAt = (t: number): { ok: true; value: TemperatureState } | { ok: false; error: TemperatureHistoryError } => {
+    const paste = at(t);
+    const without = withoutEttringite(t, paste);
+    if (!without.ok) return { ok: false, error: { ...without.error, dose: t } };
+    return { ok: true, value: temperatureState(paste, without.value, dataset, base.binderContentKgPerM3) };
+  };
+  const atService = stateAt(serviceC);
+  if (!atService.ok) return atService;
+  let atCuring: TemperatureState | null = null;
+  if (curingC !== undefined) {
+    const s = stateAt(curingC);
+    if (!s.ok) return s;
+    atCuring = s.value;
+  }
+  // mol per 100 g binder × (B kg/m³ × 10 per 100 g) = mol/m³
+  const molPerM3 = (per100g: number) => per100g * base.binderContentKgPerM3 * 10;
+  const sulfateGain = atCuring ? Math.max(0, atService.value.sulfate.inAftMolSO3Per100gBinder - atCuring.sulfate.inAftMolSO3Per100gBinder) : null;
+  const volumeGain = atCuring ? Math.max(0, atService.value.ettringiteVolumeCm3 - atCuring.ettringiteVolumeCm3) : null;
+  return {
+    ok: true,
+    value: {
+      sweep: { id: "temperature", title: "Assemblage against temperature", doseLabel: "Temperature", doseUnit: "°C", points: chartPoints },
+      summary: {
+        serviceTemperatureC: serviceC,
+        curingTemperatureC: curingC ?? null,
+        ettringiteStabilityTemperatureC: stabilityLimit.kind === "found" ? stabilityLimit.temperatureC : null,
+        stabilityLimit,
+        atService: atService.value,
+        atCuring,
+        sulfateToEttringiteOnCoolingMolSO3Per100gBinder: sulfateGain,
+        sulfateToEttringiteOnCoolingMolSO3PerM3: sulfateGain === null ? null : molPerM3(sulfateGain),
+        ettringiteVolumeGainOnCoolingCm3Per100gBinder: volumeGain,
+        // cm³ per 100 g binder × B kg/m³ × 10 (100 g units per kg) / 1000 (cm³ per L) = L/m³
+        ettringiteVolumeGainOnCoolingLitresPerM3: volumeGain === null ? null : (volumeGain * base.binderContentKgPerM3 * 10) / 1000,
+        equilibriumChecks: { resolvedColdAtC, remainingSupersaturation },
+      },
+    },
+  };
+}

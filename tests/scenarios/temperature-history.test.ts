@@ -1,0 +1,154 @@
+import { describe, it, expect } from "vitest";
+import { binderSystemFromInput } from "../../lib/cement/binder-system";
+import { hydratePaste } from "../../lib/cement/hydrate-paste";
+import { parseExposureInput } from "../../lib/schema/exposure-input";
+import { brentRoot, formationGibbsKJPerMol, temperatureHistory } from "../../lib/scenarios/temperature-history";
+import { phaseMoles, type ScenarioBase } from "../../lib/scenarios/sweep";
+
+/** The base paste of the scenario brief: typical CEM I preset, w/b 0.5, 350 kg/m³, 28 days at 20 °C (typical, not a specific cement). */
+function basePaste(): ScenarioBase {
+  const system = binderSystemFromInput({
+    cement: { kind: "preset", presetId: "en197-cem-i" },
+    mix: { waterBinderRatio: 0.5, binderContentKgPerM3: 350 },
+    age: { mode: "age", ageDays: 28, curingTemperatureC: 20 },
+  });
+  if (!system.ok) throw new Error(JSON.stringify(system.error));
+  return { composition: system.value.composition, temperatureC: 20, binderContentKgPerM3: 350 };
+}
+
+function exposure(raw: Record<string, unknown> = {}) {
+  const parsed = parseExposureInput({ serviceTemperatureC: 20, ...raw });
+  if (!parsed.ok) throw new Error(parsed.error.message);
+  return parsed.value;
+}
+
+const base = basePaste();
+const run = temperatureHistory(base, exposure(), { points: 12, curingMaxTemperatureC: 85 });
+if (!run.ok) throw new Error(JSON.stringify(run.error));
+const result = run.value;
+
+describe("Brent's root finder", () => {
+  // References: scipy.optimize.brentq (Debian python3-scipy 1.10), xtol 1e-12, run with /usr/bin/python3.
+  const ok = (g: (x: number) => number) => (x: number) => ({ ok: true as const, value: g(x) });
+  it.each([
+    ["cos x − x on [0, 1]", (x: number) => Math.cos(x) - x, 0, 1, 0.7390851332151559],
+    ["x³ − 2x − 5 on [2, 3] (Wallis's equation)", (x: number) => x ** 3 - 2 * x - 5, 2, 3, 2.094551481542327],
+    ["eˣ − 10 on [0, 5]", (x: number) => Math.exp(x) - 10, 0, 5, 2.302585092994085],
+  ])("finds the root of %s as scipy's brentq does", (_name, g, a, b, reference) => {
+    const root = brentRoot(ok(g), { a, b, fa: g(a), fb: g(b) }, 1e-12, 100);
+    expect(root.ok).toBe(true);
+    if (root.ok) {
+      expect(root.value.x).toBeCloseTo(reference, 10);
+      expect(root.value.iterations).toBeLessThan(20);
+    }
+  });
+
+  it("refuses a bracket without a sign change and stops at the iteration cap", () => {
+    const g = (x: number) => x * x + 1;
+    const refused = brentRoot(ok(g), { a: 0, b: 1, fa: 1, fb: 2 }, 1e-12, 100);
+    expect(refused.ok).toBe(false);
+    const wallis = (x: number) => x ** 3 - 2 * x - 5;
+    const capped = brentRoot(ok(wallis), { a: 2, b: 3, fa: wallis(2), fb: wallis(3) }, 0, 2);
+    expect(capped.ok && capped.value.iterations).toBe(2);
+    if (capped.ok) expect(capped.value.x).toBeGreaterThan(2);
+    if (capped.ok) expect(capped.value.x).toBeLessThan(3);
+  });
+});
+
+describe("the temperature sweep of a CEM I paste, 5–95 °C", () => {
+  const temperatures = result.sweep.points.map((p) => p.dose);
+
+  it("covers 5 to 95 °C and includes the service and the curing temperatures", () => {
+    expect(temperatures[0]).toBe(5);
+    expect(temperatures[temperatures.length - 1]).toBe(95);
+    expect(temperatures).toContain(20);
+    expect(temperatures).toContain(85);
+    expect([...temperatures].sort((a, b) => a - b)).toEqual(temperatures);
+  });
+
+  it("holds ettringite at 20 °C (Lothenbach, Winnefeld, Alder, Wieland & Lunk 2007, Cem. Concr. Res. 37, 483)", () => {
+    expect(result.summary.atService.ettringiteMol).toBeGreaterThan(0);
+    expect(result.sweep.points.find((p) => p.dose === 20)!.ettringiteMol).toBeGreaterThan(0);
+  });
+
+  it("has more sulfate in the pore solution when hot: measured pore solutions of Portland pastes at 40–60 °C carry more sulfate than at 20 °C (Lothenbach et al. 2007)", () => {
+    const dissolved = (t: number) => result.sweep.points.find((p) => p.dose === t)!.dissolvedSulfateMolSO3;
+    expect(dissolved(85)).toBeGreaterThan(10 * dissolved(20));
+  });
+
+  it("leaves no allowed solid supersaturated at any point (equilibrium check on every saturation index)", () => {
+    expect(result.summary.equilibriumChecks.remainingSupersaturation).toEqual([]);
+  });
+});
+
+describe("the ettringite stability temperature of this mix", () => {
+  const limit = result.summary.stabilityLimit;
+
+  it("is found by root finding and bracketed by the full equilibrium: ettringite present 0.5 °C below, absent 0.5 °C above", () => {
+    expect(limit.kind).toBe("found");
+    if (limit.kind !== "found") return;
+    const at = (t: number) => {
+      const paste = hydratePaste(base.composition, { temperatureC: t, binderContentKgPerM3: 350 });
+      if (!paste.ok) throw new Error(JSON.stringify(paste.error));
+      return phaseMoles(paste.value, "ettringite");
+    };
+    expect(at(limit.temperatureC - 0.5)).toBeGreaterThan(0);
+    expect(at(limit.temperatureC + 0.5)).toBe(0);
+  });
+
+  it("lies above the 65–75 °C reported for Portland pastes, as the data set's known ettringite over-stability predicts (pinned, not tuned)", () => {
+    // Published: ettringite decomposes in Portland pastes above about 65–75 °C (Lothenbach et al. 2007, Cem. Concr. Res.
+    // 37, 483; Taylor, Famy & Scrivener 2001, Cem. Concr. Res. 31, 683; range as recalled, from memory).
+    // The data set's own validation reports ettringite about 1.3 log10 units too stable at 85 °C (constant Cp of
+    // Al(OH)4-). Near the root the ettringite saturation index falls by roughly 0.12 per °C in this mix, so 1.3 log
+    // units move the root by about 10 °C: the engine gives about 90 °C. This test pins that value (±1.5 °C) so a
+    // change of data or engine shows up; it is NOT evidence of agreement with the published range.
+    expect(result.summary.ettringiteStabilityTemperatureC).not.toBeNull();
+    const t = result.summary.ettringiteStabilityTemperatureC!;
+    expect(t).toBeGreaterThan(75);
+    expect(Math.abs(t - 89.9)).toBeLessThan(1.5);
+  });
+});
+
+describe("the comparison of curing (85 °C) and service (20 °C)", () => {
+  const { atCuring, atService } = result.summary;
+
+  it("keeps every mole of sulfate of the paste in some host (mass balance against the bulk composition)", () => {
+    const bulkSulfurMol = base.composition.reactedElementsMol.S;
+    for (const state of [atCuring!, atService]) expect(state.sulfate.totalMolSO3Per100gBinder).toBeCloseTo(bulkSulfurMol, 8);
+  });
+
+  it("holds more sulfate outside ettringite at 85 °C than at 20 °C, and returns it to ettringite on cooling", () => {
+    expect(atCuring!.sulfate.outsideAftMolSO3Per100gBinder).toBeGreaterThan(atService.sulfate.outsideAftMolSO3Per100gBinder);
+    expect(result.summary.sulfateToEttringiteOnCoolingMolSO3Per100gBinder!).toBeGreaterThan(0);
+    expect(result.summary.ettringiteVolumeGainOnCoolingCm3Per100gBinder!).toBeGreaterThan(0);
+  });
+
+  it("gives the per-m³ figures for 350 kg binder per m³ (3500 portions of 100 g)", () => {
+    expect(atCuring!.sulfate.outsideAftMolSO3PerM3).toBeCloseTo(atCuring!.sulfate.outsideAftMolSO3Per100gBinder * 3500, 9);
+    expect(result.summary.ettringiteVolumeGainOnCoolingLitresPerM3!).toBeCloseTo(result.summary.ettringiteVolumeGainOnCoolingCm3Per100gBinder! * 3.5, 9);
+  });
+
+  it("reports the driving force to re-form ettringite at service as a positive saturation index, ΔrG = −RT ln10 · SI", () => {
+    expect(atService.ettringiteSaturationIndexWithoutIt).toBeGreaterThan(0);
+    // ΔrG = −RT ln10 · SI: at 25 °C one log10 unit is 5.708 kJ/mol (R = 8.314462618 J/(mol K), CODATA 2018).
+    expect(formationGibbsKJPerMol(1, 25)).toBeCloseTo(-5.708, 3);
+    expect(atService.ettringiteFormationGibbsKJPerMol).toBeCloseTo(formationGibbsKJPerMol(atService.ettringiteSaturationIndexWithoutIt, 20), 12);
+  });
+});
+
+describe("bad input", () => {
+  it("refuses a curing temperature outside the 0–100 °C of the data set, naming the field", () => {
+    const r = temperatureHistory(base, exposure(), { points: 4, curingMaxTemperatureC: 120 });
+    expect(r.ok).toBe(false);
+    if (!r.ok) {
+      expect(r.error.code).toBe("temperature_out_of_range");
+      if (r.error.code === "temperature_out_of_range") expect(r.error.field).toBe("curing.maxTemperatureC");
+    }
+  });
+
+  it("refuses a sweep whose end is not above its start", () => {
+    const r = temperatureHistory(base, exposure(), { points: 4, sweepFromC: 50, sweepToC: 40 });
+    expect(r.ok).toBe(false);
+  });
+});

@@ -86,19 +86,19 @@ export function readCheckFiles(root?: string): CheckFile[] {
 }
 
 /**
- * The dossier for the page and the report appendix: the merged file if present, else merged on the fly from
- * the per-file records, else `null` ("not generated yet — run npm test").
+ * The dossier for the page and the report appendix: merged from the per-file records when there are any
+ * (so it is never staler than the last run, whether or not the merge step ran), else the merged file, else
+ * `null` ("not generated yet — run npm test").
  */
 export function readDossier(root?: string): ValidationDossier | null {
-  const file = dossierPath(root);
-  if (existsSync(file)) {
-    try {
-      const parsed = validationDossier.safeParse(JSON.parse(readFileSync(file, "utf8")));
-      if (parsed.success) return parsed.data;
-    } catch {
-      // fall through to the per-file records
-    }
-  }
   const files = readCheckFiles(root);
-  return files.length > 0 ? mergeCheckFiles(files) : null;
+  if (files.length > 0) return mergeCheckFiles(files);
+  const file = dossierPath(root);
+  if (!existsSync(file)) return null;
+  try {
+    const parsed = validationDossier.safeParse(JSON.parse(readFileSync(file, "utf8")));
+    return parsed.success ? parsed.data : null;
+  } catch {
+    return null;
+  }
 }

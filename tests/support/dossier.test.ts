@@ -50,15 +50,24 @@ describe("readDossier and collectDossier", () => {
     expect(readDossier(tempRoot())).toBeNull();
   });
 
-  it("merges per-file records on the fly, and reads the merged file once collected", () => {
+  it("merges per-file records on the fly, skipping unreadable ones, so a later run is never hidden by an older merged file", () => {
     const root = tempRoot();
     mkdirSync(checksDirectory(root), { recursive: true });
     writeFileSync(path.join(checksDirectory(root), "a.json"), JSON.stringify(file("tests/a.test.ts", [check("a", true)])));
     writeFileSync(path.join(checksDirectory(root), "broken.json"), "{ half");
-    expect(readDossier(root)?.summary.checks).toBe(1);
     const collected = collectDossier(root, new Date("2026-12-01T00:00:00Z"));
     expect(existsSync(dossierPath(root))).toBe(true);
     expect(JSON.parse(readFileSync(dossierPath(root), "utf8")).summary).toEqual(collected.summary);
+    writeFileSync(path.join(checksDirectory(root), "b.json"), JSON.stringify(file("tests/b.test.ts", [check("b", false)])));
+    expect(readDossier(root)?.summary).toMatchObject({ checks: 2, failed: 1 });
+  });
+
+  it("reads the merged file when the per-file records are gone", () => {
+    const root = tempRoot();
+    mkdirSync(checksDirectory(root), { recursive: true });
+    writeFileSync(path.join(checksDirectory(root), "a.json"), JSON.stringify(file("tests/a.test.ts", [check("a", true)])));
+    collectDossier(root, new Date("2026-12-01T00:00:00Z"));
+    rmSync(checksDirectory(root), { recursive: true });
     expect(readDossier(root)?.generatedAt).toBe("2026-12-01T00:00:00.000Z");
   });
 });

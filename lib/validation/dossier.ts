@@ -69,7 +69,7 @@ export function mergeCheckFiles(files: readonly CheckFile[], now: Date = new Dat
   };
 }
 
-/** The per-file check records found under `tests/artifacts/validation/`. */
+/** The per-file check records found under `tests/artifacts/validation/`, for test files that still exist. */
 export function readCheckFiles(root?: string): CheckFile[] {
   const directory = checksDirectory(root);
   if (!existsSync(directory)) return [];
@@ -77,7 +77,8 @@ export function readCheckFiles(root?: string): CheckFile[] {
   for (const name of readdirSync(directory).filter((n) => n.endsWith(".json")).sort()) {
     try {
       const parsed = checkFile.safeParse(JSON.parse(readFileSync(path.join(directory, name), "utf8")));
-      if (parsed.success) files.push(parsed.data);
+      // A record of a test file that no longer exists (renamed or removed) is stale: left out.
+      if (parsed.success && existsSync(path.join(root ?? process.cwd(), parsed.data.testFile))) files.push(parsed.data);
     } catch {
       // a half-written file from an interrupted run: skipped
     }

@@ -6,9 +6,12 @@ import { collectDossier } from "../../lib/validation/collect";
 import { checkPasses, checksDirectory, dossierPath, mergeCheckFiles, readDossier, type CheckFile } from "../../lib/validation/dossier";
 
 const roots: string[] = [];
+/** A temporary repository root with the test files the records below name. */
 function tempRoot(): string {
   const root = mkdtempSync(path.join(tmpdir(), "hydrastate-dossier-"));
   roots.push(root);
+  mkdirSync(path.join(root, "tests"), { recursive: true });
+  for (const name of ["a", "b"]) writeFileSync(path.join(root, "tests", `${name}.test.ts`), "");
   return root;
 }
 afterEach(() => {
@@ -60,6 +63,14 @@ describe("readDossier and collectDossier", () => {
     expect(JSON.parse(readFileSync(dossierPath(root), "utf8")).summary).toEqual(collected.summary);
     writeFileSync(path.join(checksDirectory(root), "b.json"), JSON.stringify(file("tests/b.test.ts", [check("b", false)])));
     expect(readDossier(root)?.summary).toMatchObject({ checks: 2, failed: 1 });
+  });
+
+  it("leaves out the records of test files that no longer exist", () => {
+    const root = tempRoot();
+    mkdirSync(checksDirectory(root), { recursive: true });
+    writeFileSync(path.join(checksDirectory(root), "gone.json"), JSON.stringify(file("tests/gone.test.ts", [check("g", true)])));
+    writeFileSync(path.join(checksDirectory(root), "a.json"), JSON.stringify(file("tests/a.test.ts", [check("a", true)])));
+    expect(readDossier(root)?.checks.map((c) => c.id)).toEqual(["a"]);
   });
 
   it("reads the merged file when the per-file records are gone", () => {

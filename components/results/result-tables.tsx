@@ -9,17 +9,31 @@ const isObject = (v: unknown): v is Loose => v !== null && typeof v === "object"
 
 type Species = { name: string; molality: number; activity?: number };
 
+/**
+ * The pore solution: from `assemblage.paste` of the assess service (`poreSolution` with pH, ionic strength and
+ * element totals in mmol/kg; species from the equilibrium `assemblage.solution`), or from a flat assemblage.
+ * Element totals are returned in mol/kg.
+ */
 export function poreSolutionOf(result: unknown): { species: Species[]; pH: number | null; ionicStrength: number | null; elementMolality: Record<string, number> } | null {
   if (!isObject(result) || !isObject(result.assemblage)) return null;
-  const a = result.assemblage;
-  const solution = [a.poreSolution, a.solution, isObject(a.equilibrium) ? a.equilibrium.solution : undefined].find(isObject);
-  if (!solution) return null;
-  const species = Array.isArray(solution.species)
+  const a = isObject(result.assemblage.paste) ? result.assemblage.paste : result.assemblage;
+  const equilibrium = [a.assemblage, a.equilibrium].find(isObject);
+  const summary = isObject(a.poreSolution) ? a.poreSolution : undefined;
+  const solution = [summary && Array.isArray(summary.species) ? summary : undefined, a.solution, equilibrium?.solution].find(isObject);
+  if (!solution && !summary) return null;
+  const species = solution && Array.isArray(solution.species)
     ? (solution.species.filter((s) => isObject(s) && typeof s.name === "string" && typeof s.molality === "number") as Species[])
     : [];
-  const elementMolality = isObject(solution.elementMolality) ? (solution.elementMolality as Record<string, number>) : {};
-  const pH = [a.pH, solution.pH, isObject(a.equilibrium) ? a.equilibrium.pH : undefined].find((v) => typeof v === "number") as number | undefined;
-  const I = [a.ionicStrength, solution.ionicStrength, isObject(a.equilibrium) ? a.equilibrium.ionicStrength : undefined].find((v) => typeof v === "number") as number | undefined;
+  const mmolPerMol = 1000;
+  const elementMolality: Record<string, number> = {};
+  if (summary && isObject(summary.elementsMmolPerKg)) {
+    for (const [e, v] of Object.entries(summary.elementsMmolPerKg)) if (typeof v === "number") elementMolality[e] = v / mmolPerMol;
+  } else if (solution && isObject(solution.elementMolality)) {
+    for (const [e, v] of Object.entries(solution.elementMolality)) if (typeof v === "number") elementMolality[e] = v;
+  }
+  const firstNumber = (...values: unknown[]) => values.find((v) => typeof v === "number") as number | undefined;
+  const pH = firstNumber(summary?.pH, a.pH, solution?.pH, equilibrium?.pH);
+  const I = firstNumber(summary?.ionicStrengthMolPerKg, a.ionicStrength, solution?.ionicStrength, equilibrium?.ionicStrength);
   return { species, pH: pH ?? null, ionicStrength: I ?? null, elementMolality };
 }
 

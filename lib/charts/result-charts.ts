@@ -12,11 +12,11 @@ import { strengthMaturityChart, type MaturityPoint, type StrengthPoint } from ".
  * result may come from an older engine, and a part that is absent gives no chart rather than a guess.
  *
  * Where the parts are read (an object at each path, first match wins):
- * - assemblage: `assemblage` — phases as `phases: [{ id, volumeCm3 }]` or `phaseVolumesCm3: { id: cm³ }`,
- *   with `poreSolutionCm3` and `emptyPorosityCm3` (all per 100 g binder), `pH`;
- * - scenarios: `scenarios` — an array, or an object of sweeps, each `{ id, title, doseLabel, doseUnit,
- *   points: [{ dose, pH, phases | phaseVolumesCm3 }] }`;
- * - hydration timeline: `timeline` or `hydrationTimeline` — `[{ ageDays, phases | phaseVolumesCm3 }]`;
+ * - assemblage: `assemblage.paste` (`volumes` with `pore-solution`, `porosity.chemicalShrinkageCm3` as the
+ *   empty porosity; per 100 g binder), or a flat `assemblage` with `phases: [{ id, volumeCm3 }]` or `phaseVolumesCm3`;
+ * - scenarios: `scenarios` — an array, or an object of scenarios, each a sweep `{ id, title, doseLabel, doseUnit,
+ *   points: [{ dose, pH, phases | phaseVolumesCm3 }] }` or `{ sweep: <that>, summary }`;
+ * - hydration timeline: `assemblage.timeline`, `timeline` or `hydrationTimeline` — `[{ ageDays, phases | phaseVolumesCm3, poreSolutionVolumeCm3 }]`;
  * - element temperature, strength, maturity: `curing` — the curing advice (`temperature`, `strength`,
  *   `maturity`, `strengthTargets`); the DEF limit from `curing.limits.maxTemperatureC` or 70 °C (Taylor, Famy &
  *   Scrivener 2001, Cem. Concr. Res. 31, 683);
@@ -50,16 +50,30 @@ function first(result: Loose, keys: string[]): unknown {
   return undefined;
 }
 
+const PORE_SOLUTION_ID = "pore-solution";
+
+/**
+ * The base assemblage: `assemblage.paste` of the assess service (`volumes` with `pore-solution`, empty
+ * porosity = `porosity.chemicalShrinkageCm3`), or a flat `assemblage` with `phases`/`phaseVolumesCm3`.
+ */
 function assemblageOf(result: Loose): AssemblageVolumes | undefined {
   const a = result.assemblage;
   if (!isObject(a)) return undefined;
-  const volumes = phaseVolumesOf(a);
+  const paste = isObject(a.paste) ? a.paste : a;
+  const volumes = isObject(paste.volumes) ? phaseVolumesOf({ phaseVolumesCm3: paste.volumes }) : phaseVolumesOf(paste);
+  const poreSolution = volumes[PORE_SOLUTION_ID];
+  delete volumes[PORE_SOLUTION_ID];
   if (Object.keys(volumes).length === 0) return undefined;
+  const porosity = isObject(paste.porosity) ? paste.porosity : {};
+  const inputs = isObject(result.inputs) ? result.inputs : {};
+  const age = isObject(inputs.age) && inputs.age.mode === "age" && isNumber(inputs.age.ageDays) ? `${inputs.age.ageDays} d` : null;
+  const temperatureC = isNumber(a.temperatureC) ? a.temperatureC : isNumber(paste.temperatureC) ? paste.temperatureC : null;
+  const label = typeof a.label === "string" ? a.label : [age, temperatureC !== null ? `${temperatureC} °C` : null].filter(Boolean).join(" at ") || "Assemblage";
   return {
-    label: typeof a.label === "string" ? a.label : "Assemblage",
+    label,
     phaseVolumesCm3: volumes,
-    poreSolutionCm3: isNumber(a.poreSolutionCm3) ? a.poreSolutionCm3 : null,
-    emptyPorosityCm3: isNumber(a.emptyPorosityCm3) ? a.emptyPorosityCm3 : null,
+    poreSolutionCm3: isNumber(poreSolution) ? poreSolution : isNumber(porosity.poreSolutionVolumeCm3) ? porosity.poreSolutionVolumeCm3 : isNumber(paste.poreSolutionCm3) ? paste.poreSolutionCm3 : null,
+    emptyPorosityCm3: isNumber(porosity.chemicalShrinkageCm3) ? porosity.chemicalShrinkageCm3 : isNumber(paste.emptyPorosityCm3) ? paste.emptyPorosityCm3 : null,
   };
 }
 
@@ -67,7 +81,9 @@ function sweepsOf(result: Loose): ScenarioSweep[] {
   const raw = result.scenarios;
   const list = Array.isArray(raw) ? raw : isObject(raw) ? Object.entries(raw).map(([id, v]) => (isObject(v) ? { id, ...v } : v)) : [];
   const sweeps: ScenarioSweep[] = [];
-  for (const s of list) {
+  for (const entry of list) {
+    // A scenario of the assess service carries its sweep under `sweep`, beside its summary.
+    const s = isObject(entry) && isObject(entry.sweep) ? { id: entry.id, ...entry.sweep } : entry;
     if (!isObject(s) || !Array.isArray(s.points)) continue;
     const points: SweepPoint[] = s.points
       .filter((p): p is Loose => isObject(p) && isNumber(p.dose))
@@ -86,10 +102,15 @@ function sweepsOf(result: Loose): ScenarioSweep[] {
 }
 
 function timelineOf(result: Loose): TimelinePointVolumes[] {
-  const raw = first(result, ["timeline", "hydrationTimeline"]);
+  const raw = first(result, ["timeline", "hydrationTimeline"]) ?? (isObject(result.assemblage) ? result.assemblage.timeline : undefined);
   const points = isObject(raw) && Array.isArray(raw.points) ? raw.points : raw;
   if (!Array.isArray(points)) return [];
-  return points.filter((p): p is Loose => isObject(p) && isNumber(p.ageDays)).map((p) => ({ ageDays: p.ageDays as number, phaseVolumesCm3: phaseVolumesOf(p) }));
+  return points
+    .filter((p): p is Loose => isObject(p) && isNumber(p.ageDays))
+    .map((p) => ({
+      ageDays: p.ageDays as number,
+      phaseVolumesCm3: { ...phaseVolumesOf(p), ...(isNumber(p.poreSolutionVolumeCm3) ? { "pore solution": p.poreSolutionVolumeCm3 } : {}) },
+    }));
 }
 
 function rhMapOf(result: Loose): RhTemperatureCell[] {

@@ -34,3 +34,33 @@ describe("result charts", () => {
     expect(chart.thresholds.map((t) => t.value)).toEqual([70]);
   });
 });
+
+describe("result charts from the assess service's result shape", () => {
+  // Shape of `AssessmentResult` in lib/service/assess.ts (numbers invented for the test).
+  const serviceResult = {
+    inputs: { age: { mode: "age", ageDays: 28, curingTemperatureC: 20 } },
+    assemblage: {
+      temperatureC: 20,
+      paste: { volumes: { csh: 20, portlandite: 5, "pore-solution": 9 }, porosity: { poreSolutionVolumeCm3: 9, chemicalShrinkageCm3: 2.5 } },
+      timeline: [
+        { ageDays: 1, phases: [{ id: "alite", origin: "unreacted", grams: 40, volumeCm3: 13 }], poreSolutionVolumeCm3: 20, pH: 13.1 },
+        { ageDays: 28, phases: [{ id: "alite", origin: "unreacted", grams: 9, volumeCm3: 3 }], poreSolutionVolumeCm3: 10, pH: 13.3 },
+      ],
+    },
+    scenarios: { sulfate: { sweep: { id: "sulfate", title: "Sulfate ingress", doseLabel: "SO4 added", doseUnit: "mmol/100 g", points: [{ dose: 0, phaseVolumesCm3: { ettringite: 4 }, pH: 13.3 }] }, summary: {} } },
+  };
+
+  it("takes pore solution and empty porosity out of the phase list into their own segments", () => {
+    const chart = resultCharts(serviceResult).find((c) => c.id === "phase-volumes")!;
+    expect(chart.series.map((s) => s.label)).toEqual(["csh", "portlandite", "pore solution", "empty porosity"]);
+    expect(chart.rows[0]).toMatchObject({ label: "28 d at 20 °C", s0: 20, s1: 5, s2: 9, s3: 2.5 });
+  });
+
+  it("reads each scenario's sweep under `sweep` and the timeline under the assemblage, with its pore solution", () => {
+    const charts = resultCharts(serviceResult);
+    expect(charts.map((c) => c.id)).toEqual(["phase-volumes", "sweep-sulfate", "hydration-timeline"]);
+    const timeline = charts[2];
+    const pore = timeline.series.find((s) => s.label === "pore solution")!;
+    expect(timeline.rows.map((r) => r[pore.key])).toEqual([20, 10]);
+  });
+});

@@ -48,3 +48,20 @@ describe("exposure class table", () => {
     expect(screen.getByText("National annexes govern.")).toBeTruthy();
   });
 });
+
+describe("pore solution of the assess service's result", () => {
+  it("converts the element totals from mmol/kg to mol/kg and takes the species from the equilibrium", () => {
+    const solution = poreSolutionOf({
+      assemblage: {
+        paste: {
+          poreSolution: { pH: 13.5, ionicStrengthMolPerKg: 0.4, waterKg: 0.03, elementsMmolPerKg: { K: 250, Na: 90 } },
+          assemblage: { solution: { species: [{ name: "OH-", molality: 0.3, activity: 0.2 }] } },
+        },
+      },
+    })!;
+    expect(solution.elementMolality).toEqual({ K: 0.25, Na: 0.09 });
+    expect(solution.pH).toBe(13.5);
+    expect(solution.ionicStrength).toBe(0.4);
+    expect(solution.species.map((s) => s.name)).toEqual(["OH-"]);
+  });
+});

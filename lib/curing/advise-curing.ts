@@ -147,11 +147,16 @@ function outputIndices(timesH: readonly number[], outputIntervalH: number): numb
   return indices;
 }
 
+export type AdviseCuringOptions = {
+  /** Label of an entered heat curve in the output (e.g. the thermodynamic heat of the binder form); default "entered heat curve". */
+  heatCurveLabel?: string;
+};
+
 /**
  * The whole curing advisory for validated input: heat source, element temperature history, maturity and
  * strength at core and surface, EN 13670 curing period, evaporation, cold-weather check, flags and cautions.
  */
-export function adviseCuring(input: CuringInput): CuringAdvice {
+export function adviseCuring(input: CuringInput, options: AdviseCuringOptions = {}): CuringAdvice {
   const binder = curingBinderOf(input);
   let heatSource: HeatSource;
   let ultimate: number | null = null;
@@ -161,7 +166,7 @@ export function adviseCuring(input: CuringInput): CuringAdvice {
       input.heatCurve.points.map((p) => ({ equivalentAgeH: p.equivalentAgeH, cumulativeHeatJPerKgBinder: p.cumulativeHeatJPerG / joulesPerGramPerJPerKg })),
       input.heatCurve.referenceTemperatureC,
       input.heatCurve.activationEnergyJPerMol,
-      "entered heat curve",
+      options.heatCurveLabel ?? "entered heat curve",
     );
   } else {
     const details = hydrationHeatSource(binder);

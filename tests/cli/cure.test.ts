@@ -73,3 +73,33 @@ describe("cure command", () => {
     expect(r.stderr).toMatch(/--input/);
   });
 });
+
+describe("cure command, binder form (thermodynamic heat)", () => {
+  const binderForm = {
+    element: { thicknessM: 2.0 },
+    concrete: { binderKgPerM3: 420, waterBinderRatio: 0.42, fcm28MPa: 45 },
+    binder: { cement: { kind: "preset", presetId: "en197-cem-i" }, heatCalculation: { points: 10 } },
+    placementTemperatureC: 25,
+    ambient: { kind: "constant", temperatureC: 20 },
+    faces: { a: { cover: "plywood-formwork" } },
+    durationH: 96,
+  };
+
+  it("takes the assessment's binder form, uses the thermodynamic heat curve and reports it", () => {
+    const r = cli(["--input", "-"], JSON.stringify(binderForm));
+    expect(r.status).toBe(0);
+    const out = JSON.parse(r.stdout);
+    expect(out.heatModel.label).toMatch(/thermodynamic heat/);
+    expect(out.thermodynamicHeat.curve).toHaveLength(10);
+    // A thick element (≥ 1.5 m) of a high-cement mix placed at 25 °C peaks above 60 °C (ACI 207.1R mass-concrete
+    // behaviour, from memory; issue 6 acceptance).
+    expect(out.temperature.peakCoreC).toBeGreaterThan(60);
+  });
+
+  it("exits 2 naming the field for a slag binder, which the thermodynamic heat does not cover", () => {
+    const r = cli(["--input", "-"], JSON.stringify({ ...binderForm, binder: { cement: { kind: "preset", presetId: "en197-cem-iii-a" } } }));
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/^input: .*slag.*phase form/);
+    expect(r.stderr).not.toMatch(/at .*\.ts/);
+  });
+});

@@ -1,12 +1,35 @@
 /**
  * `npm run cli -- cure --input FILE.json`: the curing advisory (heat, element temperature, maturity and
  * strength, curing period, evaporation, cold weather, flags) as JSON. Bad input → one line naming the field, exit 2.
+ *
+ * Two input forms: the curing form (`cement.phasesMassPercent`, default heat model or an entered `heatCurve`), and
+ * the binder form (`binder: { cement, supplementaryMaterials, heatCalculation? }` as in the assessment, mix from
+ * `concrete`), whose heat curve is the thermodynamic heat of hydration of `lib/curing/thermodynamic-heat.ts`; the
+ * output then carries a `thermodynamicHeat` section (the curve against age and its basis).
  */
 import { readJsonInput } from "../read-input";
 import { parseCuringInput } from "../../schema/curing-input";
 import { adviseCuring } from "../../curing/advise-curing";
+import { curingInputFromBinderForm, isBinderForm, type BinderFormConversion } from "../../curing/binder-form-input";
 
 export const summary = "curing advisory: element temperature, maturity, strength, curing period and risk flags";
+
+const thermodynamicHeatLabel = "thermodynamic heat of hydration (enthalpy balance of reacted binder and equilibrium assemblage)";
+
+const round = (x: number, digits: number) => Math.round(x * 10 ** digits) / 10 ** digits;
+
+function thermodynamicHeatSection(conversion: BinderFormConversion) {
+  const heat = conversion.heat;
+  return {
+    method: "heat released = enthalpy of the reacted anhydrous binder and water − enthalpy of the equilibrium assemblage and pore solution, at the calculation temperature",
+    temperatureC: heat.temperatureC,
+    activationEnergyJPerMol: heat.activationEnergyJPerMol,
+    curve: heat.points.map((p) => ({ ageDays: round(p.ageDays, 4), equivalentAgeH: round(p.equivalentAgeH, 3), heatJPerGBinder: round(p.heatJPerGBinder, 1), cumulativeHeatJPerG: round(p.cumulativeHeatJPerG, 1) })),
+    largestDecreaseJPerG: round(heat.largestDecreaseJPerG, 2),
+    presetLabels: conversion.binder.presetLabels,
+    note: "enthalpies of the anhydrous reactants and of the hydrates are recalled values (lib/data/binders/anhydrous-enthalpies.json and the cement data set); a fully hydrated ordinary Portland cement comes out about 5 % above the published 450-520 J/g",
+  };
+}
 
 export async function run(args: string[]): Promise<number> {
   const read = readJsonInput(args);
@@ -14,12 +37,24 @@ export async function run(args: string[]): Promise<number> {
     process.stderr.write(`${read.message}\n`);
     return 2;
   }
-  const parsed = parseCuringInput(read.value);
+  let raw = read.value;
+  let conversion: BinderFormConversion | undefined;
+  if (isBinderForm(raw)) {
+    const converted = curingInputFromBinderForm(raw);
+    if (!converted.ok) {
+      process.stderr.write(`input: ${converted.error.message}\n`);
+      return 2;
+    }
+    conversion = converted.value;
+    raw = conversion.curingInput;
+  }
+  const parsed = parseCuringInput(raw);
   if (!parsed.ok) {
     process.stderr.write(`input: ${parsed.error.message}\n`);
     return 2;
   }
-  const advice = adviseCuring(parsed.value);
-  process.stdout.write(JSON.stringify(advice, null, 2) + "\n");
+  const advice = adviseCuring(parsed.value, conversion ? { heatCurveLabel: thermodynamicHeatLabel } : {});
+  const output = conversion ? { ...advice, thermodynamicHeat: thermodynamicHeatSection(conversion) } : advice;
+  process.stdout.write(JSON.stringify(output, null, 2) + "\n");
   return 0;
 }

@@ -79,6 +79,11 @@ export function methodNotAllowedResponse(allowed: string[]): Response {
   return jsonResponse(405, { error: "method_not_allowed", message: `allowed methods: ${allowed.join(", ")}`, allowed }, { allow: allowed.join(", ") });
 }
 
+/** A handler for a method a route does not support: 405 with a JSON body and the Allow header. */
+export function methodNotAllowed(allowed: string[]): RouteHandler {
+  return async () => methodNotAllowedResponse(allowed);
+}
+
 export type BodyRead = { ok: true; value: unknown } | { ok: false; response: Response };
 
 function tooLarge(limitBytes: number): BodyRead {

@@ -54,3 +54,16 @@ describe("unknown API routes", () => {
     }
   });
 });
+
+describe("methods a route does not support", () => {
+  it("answer 405 with a JSON body and the Allow header", async () => {
+    const { PUT } = await import("../../app/api/v1/health/route");
+    const { DELETE } = await import("../../app/api/v1/assessments/route");
+    const health = await PUT(jsonRequest("/health", "PUT"), context());
+    expect(health.status).toBe(405);
+    expect(health.headers.get("allow")).toBe("GET");
+    expect(await json(health)).toEqual({ error: "method_not_allowed", message: "allowed methods: GET", allowed: ["GET"] });
+    const list = await DELETE(jsonRequest("/assessments", "DELETE"), context());
+    expect(list.headers.get("allow")).toBe("GET, POST");
+  });
+});

@@ -1,5 +1,5 @@
 import { runAssessment } from "@/lib/service/assess";
-import { jsonComputation } from "@/lib/service/http";
+import { jsonComputation, methodNotAllowed } from "@/lib/service/http";
 
 export const runtime = "nodejs";
 export const dynamic = "force-dynamic";
@@ -9,3 +9,9 @@ export const dynamic = "force-dynamic";
  * runs belong in the job API (`/api/v1/assess/jobs`), which reports progress and can be cancelled.
  */
 export const POST = jsonComputation((body, signal) => runAssessment(body, { signal }), { timeLimitMs: 120_000 });
+
+// Other methods: 405 with a JSON body (Next would answer with an empty one).
+export const GET = methodNotAllowed(["POST"]);
+export const PUT = methodNotAllowed(["POST"]);
+export const PATCH = methodNotAllowed(["POST"]);
+export const DELETE = methodNotAllowed(["POST"]);

@@ -1,5 +1,5 @@
 import { listAssessments, saveAssessment } from "@/lib/service/assessments";
-import { guarded, outcomeResponse, readJsonBody } from "@/lib/service/http";
+import { guarded, outcomeResponse, readJsonBody, methodNotAllowed } from "@/lib/service/http";
 import { assessmentStore } from "@/lib/service/store-instance";
 
 export const runtime = "nodejs";
@@ -12,3 +12,8 @@ export const POST = guarded(async (request: Request) => {
   if (!body.ok) return body.response;
   return outcomeResponse(saveAssessment(assessmentStore(), body.value), 201);
 });
+
+// Other methods: 405 with a JSON body (Next would answer with an empty one).
+export const PUT = methodNotAllowed(["GET", "POST"]);
+export const PATCH = methodNotAllowed(["GET", "POST"]);
+export const DELETE = methodNotAllowed(["GET", "POST"]);

@@ -1,5 +1,5 @@
 import { startAssessmentJob } from "@/lib/service/assess-jobs";
-import { guarded, outcomeResponse, readJsonBody } from "@/lib/service/http";
+import { guarded, outcomeResponse, readJsonBody, methodNotAllowed } from "@/lib/service/http";
 
 export const runtime = "nodejs";
 export const dynamic = "force-dynamic";
@@ -10,3 +10,9 @@ export const POST = guarded(async (request: Request) => {
   if (!body.ok) return body.response;
   return outcomeResponse(startAssessmentJob(body.value), 202);
 });
+
+// Other methods: 405 with a JSON body (Next would answer with an empty one).
+export const GET = methodNotAllowed(["POST"]);
+export const PUT = methodNotAllowed(["POST"]);
+export const PATCH = methodNotAllowed(["POST"]);
+export const DELETE = methodNotAllowed(["POST"]);

@@ -1,6 +1,6 @@
 import { getAssessment, removeAssessment, renameAssessment } from "@/lib/service/assessments";
 import { exportResponse } from "@/lib/service/exports";
-import { guarded, methodNotAllowedResponse, outcomeResponse, readJsonBody, routeParam } from "@/lib/service/http";
+import { guarded, methodNotAllowedResponse, outcomeResponse, readJsonBody, routeParam, methodNotAllowed } from "@/lib/service/http";
 import { assessmentStore } from "@/lib/service/store-instance";
 
 export const runtime = "nodejs";
@@ -32,3 +32,7 @@ export const DELETE = guarded(async (_request, context) => {
   if (exportFormat(segment)) return methodNotAllowedResponse(["GET"]);
   return outcomeResponse(removeAssessment(assessmentStore(), segment));
 });
+
+// Other methods: 405 with a JSON body (Next would answer with an empty one).
+export const POST = methodNotAllowed(["GET", "PATCH", "DELETE"]);
+export const PUT = methodNotAllowed(["GET", "PATCH", "DELETE"]);

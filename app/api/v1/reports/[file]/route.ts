@@ -1,4 +1,4 @@
-import { guarded, notFoundResponse, routeParam } from "@/lib/service/http";
+import { guarded, notFoundResponse, routeParam, methodNotAllowed } from "@/lib/service/http";
 import { reportResponse } from "@/lib/service/reports";
 import { assessmentStore } from "@/lib/service/store-instance";
 
@@ -12,3 +12,9 @@ export const GET = guarded(async (request, context) => {
   if (!match) return notFoundResponse(new URL(request.url).pathname);
   return reportResponse(assessmentStore(), match[1], match[2] as "pdf" | "md");
 });
+
+// Other methods: 405 with a JSON body (Next would answer with an empty one).
+export const POST = methodNotAllowed(["GET"]);
+export const PUT = methodNotAllowed(["GET"]);
+export const PATCH = methodNotAllowed(["GET"]);
+export const DELETE = methodNotAllowed(["GET"]);

@@ -1,5 +1,5 @@
 import { assessmentJobs } from "@/lib/service/assess-jobs";
-import { guarded, outcomeResponse, routeParam } from "@/lib/service/http";
+import { guarded, outcomeResponse, routeParam, methodNotAllowed } from "@/lib/service/http";
 
 export const runtime = "nodejs";
 export const dynamic = "force-dynamic";
@@ -9,3 +9,8 @@ export const GET = guarded(async (_request, context) => outcomeResponse(assessme
 
 /** DELETE: cancel (the computation stops at its next check of the AbortSignal). */
 export const DELETE = guarded(async (_request, context) => outcomeResponse(assessmentJobs().cancel(await routeParam(context, "id"))));
+
+// Other methods: 405 with a JSON body (Next would answer with an empty one).
+export const POST = methodNotAllowed(["GET", "DELETE"]);
+export const PUT = methodNotAllowed(["GET", "DELETE"]);
+export const PATCH = methodNotAllowed(["GET", "DELETE"]);

@@ -1,3 +1,5 @@
+import { expect } from "vitest";
+
 /** Builders for calling route handlers directly, as Next would. */
 export const base = "http://localhost/api/v1";
 
@@ -17,5 +19,3 @@ export async function json(response: Response): Promise<Record<string, unknown>>
   expect(response.headers.get("content-type")).toMatch(/application\/json/);
   return (await response.json()) as Record<string, unknown>;
 }
-
-import { expect } from "vitest";

@@ -210,7 +210,8 @@ export function brentRoot<E>(
   return { ok: true, value: { x: b, iterations: maxIterations } };
 }
 
-type PasteAt = (temperatureC: number, warm?: HydratedPaste) => { ok: true; value: HydratedPaste } | { ok: false; error: EquilibriumFailure };
+/** A solve at one temperature; `resolvedCold` tells that the warm-started result was replaced by a cold solve. */
+export type PasteAt = (temperatureC: number, warm?: HydratedPaste) => { ok: true; value: HydratedPaste; resolvedCold?: boolean } | { ok: false; error: EquilibriumFailure };
 
 /** The most supersaturated allowed solid of a paste (suppressed phases excluded), or undefined if none exceeds the tolerance. */
 export function supersaturatedSolid(paste: HydratedPaste, base: Pick<ScenarioBase, "suppress" | "enable">, extraSuppressed: readonly string[] = []): { phaseId: string; saturationIndex: number } | undefined {
@@ -254,7 +255,7 @@ export function pasteAtTemperature(base: ScenarioBase, addedElementsMol: Record<
     const cold = solve(temperatureC);
     if (!cold.ok) return first;
     const after = supersaturatedSolid(cold.value, base, extraSuppressed);
-    return !after || after.saturationIndex < left.saturationIndex ? cold : first;
+    return !after || after.saturationIndex < left.saturationIndex ? { ...cold, resolvedCold: true } : first;
   };
 }
 
@@ -392,7 +393,7 @@ export function temperatureHistory(
   for (const t of temperatures) {
     const solved = plain(t, previous);
     if (!solved.ok) return { ok: false, error: { ...solved.error, dose: t } };
-    if (previous && !solved.value.assemblage.warmStarted) resolvedColdAtC.push(t);
+    if (solved.resolvedCold) resolvedColdAtC.push(t);
     const still = supersaturatedSolid(solved.value, withData);
     if (still) remainingSupersaturation.push({ temperatureC: t, ...still });
     points.push({ dose: t, paste: solved.value });

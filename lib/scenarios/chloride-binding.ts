@@ -72,6 +72,10 @@ export type ChloridePoint = SweepPoint & {
   freeChlorideMolPerKgWater: number;
   /** Bound chloride, mg per g binder (the usual axis of binding isotherms). */
   boundChlorideMgPerGBinder: number;
+  /** Total, bound and free chloride per m³ of concrete, kg/m³ (% of binder × binder content / 100). */
+  totalChlorideKgPerM3: number;
+  boundChlorideKgPerM3: number;
+  freeChlorideKgPerM3: number;
   friedelSaltMol: number;
   kuzelSaltMol: number;
   /** AFm phases without chloride (monosulfate, hemi-/monocarbonate, hydroxy-AFm, …), mol per 100 g binder. */
@@ -206,7 +210,7 @@ export function chlorideBinding(
 
   const suppressedSet = new Set([...suppressedPhases(base.temperatureC, { enable: base.enable, suppress: suppressedHere })]);
   const binderChlorideMassPercent = (base.composition.reactedElementsMol.Cl ?? 0) * CHLORIDE_G_PER_MOL;
-  const pointOf = (dose: number, paste: HydratedPaste) => chloridePoint(dose, paste, binderChlorideMassPercent, chlorideSolids, chlorideFreeAfm, elementsOf, suppressedSet);
+  const pointOf = (dose: number, paste: HydratedPaste) => chloridePoint(dose, paste, binderChlorideMassPercent, base.binderContentKgPerM3, chlorideSolids, chlorideFreeAfm, elementsOf, suppressedSet);
   const warnings: string[] = [];
   const solved = swept.value.map(({ dose, paste }) => ({ dose, paste, point: pointOf(dose, paste) }));
   // A warm-started point that leaves an absent solid supersaturated is not an equilibrium (seen with the engine as of
@@ -342,6 +346,7 @@ function chloridePoint(
   dose: number,
   paste: HydratedPaste,
   binderChlorideMassPercent: number,
+  binderContentKgPerM3: number,
   chlorideSolids: ReadonlySet<string>,
   chlorideFreeAfm: ReadonlySet<string>,
   elementsOf: ReadonlyMap<string, Record<string, number>>,
@@ -363,14 +368,19 @@ function chloridePoint(
   let maxSiId: string | null = null;
   for (const [id, si] of Object.entries(paste.assemblage.saturationIndices)) if (!present.has(id) && !suppressed.has(id) && si > maxSi) [maxSi, maxSiId] = [si, id];
   const boundMassPercent = boundMol * CHLORIDE_G_PER_MOL;
+  const freeMassPercent = freeMol * CHLORIDE_G_PER_MOL;
+  const totalMassPercent = binderChlorideMassPercent + dose;
   return {
     ...sweepPoint(dose, paste),
-    totalChlorideMassPercent: binderChlorideMassPercent + dose,
+    totalChlorideMassPercent: totalMassPercent,
     boundChlorideMassPercent: boundMassPercent,
-    freeChlorideMassPercent: freeMol * CHLORIDE_G_PER_MOL,
+    freeChlorideMassPercent: freeMassPercent,
     freeChlorideMolPerKgWater: freeMolality,
     // g per 100 g binder → mg per g binder: × 1000 mg/g ÷ 100 g = × 10
     boundChlorideMgPerGBinder: boundMassPercent * 10,
+    totalChlorideKgPerM3: per100gToPerM3(totalMassPercent, binderContentKgPerM3),
+    boundChlorideKgPerM3: per100gToPerM3(boundMassPercent, binderContentKgPerM3),
+    freeChlorideKgPerM3: per100gToPerM3(freeMassPercent, binderContentKgPerM3),
     friedelSaltMol: present.has("friedel-salt") ? paste.assemblage.phases.find((p) => p.id === "friedel-salt")!.moles : 0,
     kuzelSaltMol: present.has("kuzel-salt") ? paste.assemblage.phases.find((p) => p.id === "kuzel-salt")!.moles : 0,
     chlorideFreeAfmMol: afmMol,

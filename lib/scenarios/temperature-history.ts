@@ -20,7 +20,9 @@ import { linearDoses, phaseMoles, sweepPoint, type ScenarioBase, type ScenarioSw
  *   so the assemblage changes step-wise at 50 °C;
  * - the data set's ettringite is known to be too stable at high temperature (about 1.3 log10 units at 85 °C in
  *   its own validation, traced to the constant Cp of Al(OH)4-): the computed stability temperature comes out
- *   higher than the 65–75 °C reported for Portland pastes. It is reported as computed.
+ *   higher than the 65–75 °C reported for Portland pastes (about 90 °C for the typical CEM I preset; making ettringite
+ *   uniformly 1.3 log10 units less stable lowers it by about 10 °C, so the known issue explains only part of the gap).
+ *   It is reported as computed.
  */
 
 /** Sweep range, °C, when the caller gives none: 5–95 °C covers service and steam/heat curing (common practice). */

@@ -17,10 +17,13 @@ const parsed = parseExposureInput({ serviceTemperatureC: 20, wetting: "wet-rarel
 if (!parsed.ok) throw new Error(parsed.error.message);
 const exposure = parsed.value;
 
-function flagFor(curingMaxTemperatureC: number) {
+function resultFor(curingMaxTemperatureC: number) {
   const result = temperatureHistory(base, exposure, { points: 8, curingMaxTemperatureC });
   if (!result.ok) throw new Error(JSON.stringify(result.error));
-  return delayedEttringiteFormationFlag(result.value, { exposure, curingMaxTemperatureC, waterBinderRatio: 0.5 });
+  return result.value;
+}
+function flagFor(curingMaxTemperatureC: number) {
+  return delayedEttringiteFormationFlag(resultFor(curingMaxTemperatureC), { exposure, curingMaxTemperatureC, waterBinderRatio: 0.5 });
 }
 
 describe("the delayed-ettringite-formation flag (issue 5 acceptance)", () => {
@@ -51,8 +54,17 @@ describe("the delayed-ettringite-formation flag (issue 5 acceptance)", () => {
     expect(flagFor(40)).toBeUndefined();
   });
 
+  const warm = resultFor(67);
+
   it("gives a caution within the 5 °C margin below 70 °C (curing-limits data: Taylor, Famy & Scrivener 2001; common practice margin)", () => {
-    expect(flagFor(67)?.severity).toBe("caution");
+    expect(delayedEttringiteFormationFlag(warm, { exposure, curingMaxTemperatureC: 67, waterBinderRatio: 0.5 })?.severity).toBe("caution");
+  });
+
+  it("warns below 70 °C when the mix's own ettringite stability temperature is lower than the curing temperature (rule check on the 67 °C result with its limit set to 60 °C)", () => {
+    const lowLimit = { ...warm, summary: { ...warm.summary, ettringiteStabilityTemperatureC: 60 } };
+    const flag = delayedEttringiteFormationFlag(lowLimit, { exposure, curingMaxTemperatureC: 67, waterBinderRatio: 0.5 });
+    expect(flag?.severity).toBe("warning");
+    expect(flag?.explanation).toContain("exceeds the computed ettringite stability temperature");
   });
 
   it("does not fire when no curing temperature is known", () => {

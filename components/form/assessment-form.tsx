@@ -61,12 +61,22 @@ export function AssessmentForm({ onSubmit, initialValues, busy = false, submitLa
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [formState.submitCount]);
 
+  // The sections a demo needs are shown first; the values are reset after they have mounted, so that every
+  // watcher of the conditional parts (ambient kind, composition kind) has subscribed and sees the new values.
+  const [pendingReset, setPendingReset] = useState<AssessInputRaw | null>(null);
+  useEffect(() => {
+    if (pendingReset) {
+      reset(pendingReset);
+      setPendingReset(null);
+    }
+  }, [pendingReset, reset]);
+
   const loadDemo = () => {
     setThermal(Boolean(culvertDemo.curing?.thermal));
     setSteam(false);
     setEvaporation(false);
     setMonteCarlo(false);
-    reset(structuredClone(culvertDemo));
+    setPendingReset(structuredClone(culvertDemo));
     setDemoLoaded(true);
   };
 

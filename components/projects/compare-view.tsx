@@ -45,7 +45,7 @@ export function CompareView({ ids }: { ids: string[] }) {
         {comparison.inputDifferences.length === 0 ? (
           <p>The inputs are the same.</p>
         ) : (
-          <div className="table-scroll">
+          <div className="table-scroll" tabIndex={0} role="region" aria-label="Inputs that differ (scrollable)">
             <table className="data-table compare-table">
               <caption>Only the fields that differ are listed; the highlighted cells differ from the first assessment.</caption>
               <thead>{head}</thead>

@@ -11,7 +11,7 @@ export function formatChartCell(value: number | string | null | undefined): stri
 /** The data table of a chart: the x column and one column per series, each heading with its unit. */
 export function DataTable({ chart }: { chart: ChartData }) {
   return (
-    <div className="table-scroll">
+    <div className="table-scroll" tabIndex={0} role="region" aria-label={`Data of ${chart.title} (scrollable)`}>
       <table className="data-table">
         <caption>Data of “{chart.title}”</caption>
         <thead>

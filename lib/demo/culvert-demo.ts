@@ -1,3 +1,5 @@
+import cementPresets from "../data/binders/cement-presets.json";
+import { bogueAstmC150 } from "../cement/bogue";
 import type { AssessInputRaw } from "../schema/assess-input";
 
 /**
@@ -7,9 +9,14 @@ import type { AssessInputRaw } from "../schema/assess-input";
  * sulfate-bearing clay with sodium-sulfate groundwater. All numbers here are typical, made-up values chosen so
  * that the demo shows the sulfate and curing-temperature parts of the advice; they are not measurements.
  * The cement is the typical CEM I preset of `lib/data/binders/cement-presets.json` with 25 % slag by the typical
- * slag preset (both labelled "typical, replace with your certificate").
+ * slag preset (both labelled "typical, replace with your certificate"). The thermal model's cement phases are the
+ * ASTM C150 Bogue composition of that preset, as the form derives them.
  */
 export const DEMO_LABEL = "Demo scenario (invented numbers): Fernbrook Lane box culvert in sulfate-bearing clay";
+
+const presetOxides = cementPresets.presets.find((p) => p.id === "en197-cem-i")!.cement.oxidesMassPercent;
+const bogue = bogueAstmC150(presetOxides).phasesMassPercent;
+const round1 = (x: number) => Math.round(x * 10) / 10;
 
 export const culvertDemo: AssessInputRaw = {
   project: {
@@ -42,7 +49,19 @@ export const culvertDemo: AssessInputRaw = {
     freezing: { exposed: false },
   },
   curing: {
-    maxTemperatureC: 58,
+    // Invented placement on a warm day: 24 °C concrete, air 22 ± 6 °C, plywood formwork struck at 72 h.
+    thermal: {
+      element: { thicknessM: 0.45, geometry: "symmetric" },
+      concrete: { binderKgPerM3: 360, waterBinderRatio: 0.45, fcm28MPa: 43 },
+      cement: {
+        phasesMassPercent: { C3S: round1(bogue.C3S), C2S: round1(bogue.C2S), C3A: round1(bogue.C3A), C4AF: round1(bogue.C4AF), SO3: presetOxides.SO3, MgO: presetOxides.MgO },
+      },
+      supplementaryMaterials: [{ type: "slag", massPercentOfBinder: 25 }],
+      placementTemperatureC: 24,
+      ambient: { kind: "daily-sine", meanC: 22, amplitudeC: 6 },
+      faces: { a: { cover: "plywood-formwork", stripAtH: 72, coverAfterStrip: "exposed" } },
+      curing: { plannedCuringDays: 5 },
+    },
   },
   options: { sweepPoints: 20, suppressedPhases: [], allowedPhases: [] },
 };

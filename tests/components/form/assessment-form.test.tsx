@@ -64,6 +64,10 @@ describe("assessment form validation", () => {
     expect(input.exposure.sulfateMgPerL).toBe(1800);
     expect(input.exposure.coverMm).toBe(50);
     expect(input.binder.supplementaryMaterials).toHaveLength(1);
+    // The thermal model takes thickness, binder content and w/b from the sections above, not typed twice.
+    expect(input.curing.thermal.element.thicknessM).toBe(0.45);
+    expect(input.curing.thermal.concrete).toMatchObject({ binderKgPerM3: 360, waterBinderRatio: 0.45, fcm28MPa: 43 });
+    expect(input.curing.thermal.ambient).toEqual({ kind: "daily-sine", meanC: 22, amplitudeC: 6 });
   });
 
   it("groups the sections in fieldsets with legends in the order an engineer fills them", () => {

@@ -1,4 +1,3 @@
-import { chartSourceOf } from "../report/chart-source";
 import { seriesCsv } from "../report/csv-export";
 import { resultCharts } from "../charts/result-charts";
 import type { AssessmentStore } from "../store/assessment-store";
@@ -16,5 +15,5 @@ export function exportResponse(store: AssessmentStore, id: string, format: "json
   const disposition = `attachment; filename="${fileSlug(saved.value.name)}.${format}"`;
   if (format === "json")
     return new Response(JSON.stringify(saved.value, null, 2), { status: 200, headers: { "content-type": "application/json; charset=utf-8", "content-disposition": disposition } });
-  return new Response(seriesCsv(resultCharts(chartSourceOf(saved.value.result))), { status: 200, headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": disposition } });
+  return new Response(seriesCsv(resultCharts(saved.value.result)), { status: 200, headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": disposition } });
 }

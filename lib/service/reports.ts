@@ -1,7 +1,6 @@
 import { loadDataset } from "../data/load-dataset";
 import { renderMarkdownReport } from "../report/markdown-report";
 import { renderPdfReport } from "../report/pdf-report";
-import { chartSourceOf } from "../report/chart-source";
 import { buildReportModel, type ReportModel } from "../report/report-model";
 import { resultTables } from "../report/result-tables";
 import { resultCharts } from "../charts/result-charts";
@@ -23,7 +22,7 @@ export function reportModelFor(store: AssessmentStore, id: string): ServiceOutco
       saved: saved.value,
       running: runningVersions(),
       datasetFiles: loaded.ok ? loaded.value.files : [],
-      charts: resultCharts(chartSourceOf(saved.value.result)),
+      charts: resultCharts(saved.value.result),
       tables: resultTables(saved.value.result),
       dossier: readDossier(),
     }),

@@ -28,3 +28,12 @@ describe("keyFigures of a real assessment", () => {
     expect(figures.portlandite).toBe(result.assemblage.paste.perM3.portlanditeKg);
   });
 });
+
+describe("the report model of a real assessment", () => {
+  it("carries the page's charts (the shared mapping) for the assemblage, both scenarios and the timeline", async () => {
+    const { resultCharts } = await import("../../lib/charts/result-charts");
+    const result = await demoResult();
+    const ids = resultCharts(result).map((c) => c.id);
+    for (const id of ["phase-volumes", "sweep-sulfate", "sweep-carbonation", "hydration-timeline"]) expect(ids).toContain(id);
+  });
+});

@@ -61,7 +61,9 @@ export type StabilityLimit =
   /** The phase is present at every temperature of the sweep. */
   | { kind: "stable-throughout"; upToC: number }
   /** The phase is absent at every temperature of the sweep (e.g. too little sulfate or aluminium). */
-  | { kind: "absent-throughout"; fromC: number; toC: number };
+  | { kind: "absent-throughout"; fromC: number; toC: number }
+  /** The root finding failed (an engine failure inside the bracket): the limit lies between these sweep temperatures. */
+  | { kind: "bracketed"; bracketC: [number, number]; failure: string };
 
 export type SulfateDistribution = {
   /** Sulfate of the whole paste, mol SO3 per 100 g binder. */
@@ -112,8 +114,19 @@ export type TemperatureHistoryResult = {
      * Sweep temperatures where the warm-started result left an allowed solid supersaturated and was re-solved cold,
      * and any supersaturation that remained (then the point is not a true equilibrium).
      */
-    equilibriumChecks: { resolvedColdAtC: number[]; remainingSupersaturation: { temperatureC: number; phaseId: string; saturationIndex: number }[] };
+    equilibriumChecks: EquilibriumChecks;
   };
+};
+
+/**
+ * How far the sweep could be trusted: temperatures re-solved cold after a failed or non-equilibrium warm start,
+ * any supersaturation that remained (the point is then not a true equilibrium), and chart points the engine could
+ * not solve at all (left out of the sweep).
+ */
+export type EquilibriumChecks = {
+  retriedAtC: number[];
+  remainingSupersaturation: { temperatureC: number; phaseId: string; saturationIndex: number }[];
+  failedAtC: { temperatureC: number; code: string }[];
 };
 
 export type TemperatureHistoryError =
@@ -212,8 +225,27 @@ export function brentRoot<E>(
   return { ok: true, value: { x: b, iterations: maxIterations } };
 }
 
-/** A solve at one temperature; `resolvedCold` tells that the warm-started result was replaced by a cold solve. */
-export type PasteAt = (temperatureC: number, warm?: HydratedPaste) => { ok: true; value: HydratedPaste; resolvedCold?: boolean } | { ok: false; error: EquilibriumFailure };
+/**
+ * A solve at one temperature from a neighbouring paste (or several, tried in order). `retried` tells that the first
+ * warm start failed or left an allowed solid supersaturated and another start (the next neighbour, then cold) was used.
+ */
+export type PasteAt = (
+  temperatureC: number,
+  warm?: HydratedPaste | readonly HydratedPaste[],
+) => { ok: true; value: HydratedPaste; retried?: boolean } | { ok: false; error: EquilibriumFailure };
+
+/** Most warm starts tried for one solve before the cold start (a cap so a hard point cannot take long). */
+const MAX_WARM_STARTS_PER_SOLVE = 3;
+
+/** Pastes ordered by distance in temperature from `temperatureC`: warm starts for a solve off the chain. */
+export function byDistance(points: readonly { paste: HydratedPaste }[], temperatureC: number): HydratedPaste[] {
+  return points.map((p) => p.paste).sort((x, y) => Math.abs(x.temperatureC - temperatureC) - Math.abs(y.temperatureC - temperatureC));
+}
+
+/** The warm starts for the next point of a chain: the latest pastes first (the chain runs in one direction). */
+export function recent(points: readonly { paste: HydratedPaste }[], extra: readonly HydratedPaste[] = []): HydratedPaste[] {
+  return [...points.slice(-2).reverse().map((p) => p.paste), ...extra];
+}
 
 /** The most supersaturated allowed solid of a paste (suppressed phases excluded), or undefined if none exceeds the tolerance. */
 export function supersaturatedSolid(paste: HydratedPaste, base: Pick<ScenarioBase, "suppress" | "enable">, extraSuppressed: readonly string[] = []): { phaseId: string; saturationIndex: number } | undefined {
@@ -250,14 +282,22 @@ export function pasteAtTemperature(base: ScenarioBase, addedElementsMol: Record<
     });
   };
   return (temperatureC, warm) => {
-    const first = solve(temperatureC, warm);
-    if (!first.ok || !warm) return first;
-    const left = supersaturatedSolid(first.value, base, extraSuppressed);
-    if (!left) return first;
-    const cold = solve(temperatureC);
-    if (!cold.ok) return first;
-    const after = supersaturatedSolid(cold.value, base, extraSuppressed);
-    return !after || after.saturationIndex < left.saturationIndex ? { ...cold, resolvedCold: true } : first;
+    const neighbours = warm === undefined ? [] : Array.isArray(warm) ? warm.slice(0, MAX_WARM_STARTS_PER_SOLVE) : [warm as HydratedPaste];
+    const starts: (HydratedPaste | undefined)[] = [...neighbours, undefined];
+    let best: { value: HydratedPaste; excess: number; attempt: number } | undefined;
+    let firstFailure: EquilibriumFailure | undefined;
+    for (let attempt = 0; attempt < starts.length; attempt++) {
+      const solved = solve(temperatureC, starts[attempt]);
+      if (!solved.ok) {
+        firstFailure ??= solved.error;
+        continue;
+      }
+      const excess = supersaturatedSolid(solved.value, base, extraSuppressed)?.saturationIndex ?? 0;
+      if (!best || excess < best.excess) best = { value: solved.value, excess, attempt };
+      if (excess === 0) break;
+    }
+    if (!best) return { ok: false, error: firstFailure! };
+    return { ok: true, value: best.value, retried: best.attempt > 0 };
   };
 }
 
@@ -277,12 +317,9 @@ export function stabilityLimitTemperatureC(
   toleranceC: number,
   maxIterations: number,
 ): { ok: true; value: { temperatureC: number; iterations: number } } | { ok: false; error: EquilibriumFailure & { temperatureC: number } } {
-  const evaluated: HydratedPaste[] = [];
-  const nearest = (t: number): HydratedPaste => {
-    let best = Math.abs(present.temperatureC - t) <= Math.abs(absent.temperatureC - t) ? present.paste : absent.paste;
-    for (const p of evaluated) if (Math.abs(p.temperatureC - t) < Math.abs(best.temperatureC - t)) best = p;
-    return best;
-  };
+  const evaluated: HydratedPaste[] = [present.paste, absent.paste];
+  // Neighbours by distance in temperature: the nearest first, the others as fall-back warm starts.
+  const nearest = (t: number): HydratedPaste[] => [...evaluated].sort((x, y) => Math.abs(x.temperatureC - t) - Math.abs(y.temperatureC - t));
   const f = (t: number): { ok: true; value: number } | { ok: false; error: EquilibriumFailure & { temperatureC: number } } => {
     const paste = pasteWithout(t, nearest(t));
     if (!paste.ok) return { ok: false, error: { ...paste.error, temperatureC: t } };
@@ -388,18 +425,23 @@ export function temperatureHistory(
   // (The generic `sweepPaste` warm-starts without this check; along this temperature path it carried such a state
   // from the monosulfate hydrate transition near 28 °C to 95 °C.)
   const plain = pasteAtTemperature(withData, {}, []);
-  const resolvedColdAtC: number[] = [];
+  const retriedAtC: number[] = [];
   const remainingSupersaturation: { temperatureC: number; phaseId: string; saturationIndex: number }[] = [];
   const points: { dose: number; paste: HydratedPaste }[] = [];
-  let previous: HydratedPaste | undefined;
+  const failedAtC: { temperatureC: number; code: string }[] = [];
+  const essential = new Set([serviceC, ...(curingC === undefined ? [] : [curingC])]);
   for (const t of temperatures) {
-    const solved = plain(t, previous);
-    if (!solved.ok) return { ok: false, error: { ...solved.error, dose: t } };
-    if (solved.resolvedCold) resolvedColdAtC.push(t);
+    const solved = plain(t, recent(points));
+    if (!solved.ok) {
+      // A chart point the engine cannot solve (warm and cold) is left out and recorded; the service and curing states are required.
+      if (essential.has(t)) return { ok: false, error: { ...solved.error, dose: t } };
+      failedAtC.push({ temperatureC: t, code: solved.error.code });
+      continue;
+    }
+    if (solved.retried) retriedAtC.push(t);
     const still = supersaturatedSolid(solved.value, withData);
     if (still) remainingSupersaturation.push({ temperatureC: t, ...still });
     points.push({ dose: t, paste: solved.value });
-    previous = solved.value;
   }
   const dissolvedSulfate = (paste: HydratedPaste) => (paste.assemblage.solution ? (paste.assemblage.solution.elementMolality.S ?? 0) * paste.assemblage.solution.waterKg : 0);
   const chartPoints: TemperaturePoint[] = points.map(({ dose, paste }) => ({
@@ -423,15 +465,16 @@ export function temperatureHistory(
       const present = { temperatureC: points[lost - 1].dose, paste: points[lost - 1].paste };
       const absent = { temperatureC: points[lost].dose, paste: points[lost].paste };
       const root = stabilityLimitTemperatureC(withoutEttringite, "ettringite", present, absent, tolerance, maxIterations);
-      if (!root.ok) return { ok: false, error: { ...root.error, dose: root.error.temperatureC } };
-      stabilityLimit = { kind: "found", temperatureC: root.value.temperatureC, iterations: root.value.iterations, bracketC: [present.temperatureC, absent.temperatureC] };
+      stabilityLimit = root.ok
+        ? { kind: "found", temperatureC: root.value.temperatureC, iterations: root.value.iterations, bracketC: [present.temperatureC, absent.temperatureC] }
+        : { kind: "bracketed", bracketC: [present.temperatureC, absent.temperatureC], failure: `${root.error.code} at ${root.error.temperatureC} °C` };
     }
   }
 
   const at = (t: number) => points.find((p) => p.dose === t)!.paste;
   const stateAt = (t: number): { ok: true; value: TemperatureState } | { ok: false; error: TemperatureHistoryError } => {
     const paste = at(t);
-    const without = withoutEttringite(t, paste);
+    const without = withoutEttringite(t, byDistance(points, t));
     if (!without.ok) return { ok: false, error: { ...without.error, dose: t } };
     return { ok: true, value: temperatureState(paste, without.value, dataset, base.binderContentKgPerM3) };
   };
@@ -463,7 +506,7 @@ export function temperatureHistory(
         ettringiteVolumeGainOnCoolingCm3Per100gBinder: volumeGain,
         // cm³ per 100 g binder × B kg/m³ × 10 (100 g units per kg) / 1000 (cm³ per L) = L/m³
         ettringiteVolumeGainOnCoolingLitresPerM3: volumeGain === null ? null : (volumeGain * base.binderContentKgPerM3 * 10) / 1000,
-        equilibriumChecks: { resolvedColdAtC, remainingSupersaturation },
+        equilibriumChecks: { retriedAtC, remainingSupersaturation, failedAtC },
       },
     },
   };

@@ -3,7 +3,7 @@ import type { HydratedPaste } from "../cement/hydrate-paste";
 import { loadDataset } from "../data/load-dataset";
 import { serviceTemperatureRangeC, type ExposureInput } from "../schema/exposure-input";
 import { linearDoses, phaseMoles, sweepPoint, type ScenarioBase, type ScenarioSweep, type SweepFailure, type SweepPoint } from "./sweep";
-import { formationGibbsKJPerMol, pasteAtTemperature, stabilityLimitTemperatureC, supersaturatedSolid, type StabilityLimit } from "./temperature-history";
+import { byDistance, formationGibbsKJPerMol, pasteAtTemperature, recent, stabilityLimitTemperatureC, supersaturatedSolid, type EquilibriumChecks, type StabilityLimit } from "./temperature-history";
 
 /**
  * Thaumasite, Ca6Si2(SO4)2(CO3)2(OH)12·24H2O: the C-S-H of the paste reacts with sulfate and carbonate and loses
@@ -99,7 +99,7 @@ export type ThaumasiteResult = {
     thaumasiteStabilityTemperatureC: number | null;
     stabilityLimit: StabilityLimit;
     maximumThaumasiteVolumeCm3Per100gBinder: number;
-    equilibriumChecks: { resolvedColdAtC: number[]; remainingSupersaturation: { temperatureC: number; phaseId: string; saturationIndex: number }[] };
+    equilibriumChecks: EquilibriumChecks;
   };
 };
 
@@ -217,21 +217,26 @@ export function thaumasite(
   const grid = linearDoses(toC - fromC, options.points).map((d) => fromC + d);
   const temperatures = [...new Set([...grid, serviceC])].sort((a, b) => a - b);
   const solve = pasteAtTemperature(withData, added, []);
-  const resolvedColdAtC: number[] = [];
+  const retriedAtC: number[] = [];
   const remainingSupersaturation: { temperatureC: number; phaseId: string; saturationIndex: number }[] = [];
   const points: { dose: number; paste: HydratedPaste }[] = [];
   // Start the chain from the paste without the exposure at the first temperature: a neighbouring state from which
   // the warm start reaches the dosed equilibrium more reliably than a cold start does (each result is checked anyway).
   const undosed = pasteAtTemperature(withData, {}, [])(temperatures[0]);
-  let previous: HydratedPaste | undefined = undosed.ok ? undosed.value : undefined;
+  const undosedStart = undosed.ok ? [undosed.value] : [];
+  const failedAtC: { temperatureC: number; code: string }[] = [];
   for (const t of temperatures) {
-    const solved = solve(t, previous);
-    if (!solved.ok) return { ok: false, error: { ...solved.error, dose: t } };
-    if (solved.resolvedCold) resolvedColdAtC.push(t);
+    const solved = solve(t, recent(points, undosedStart));
+    if (!solved.ok) {
+      // A chart point the engine cannot solve (warm and cold) is left out and recorded; the service state is required.
+      if (t === serviceC) return { ok: false, error: { ...solved.error, dose: t } };
+      failedAtC.push({ temperatureC: t, code: solved.error.code });
+      continue;
+    }
+    if (solved.retried) retriedAtC.push(t);
     const still = supersaturatedSolid(solved.value, withData);
     if (still) remainingSupersaturation.push({ temperatureC: t, ...still });
     points.push({ dose: t, paste: solved.value });
-    previous = solved.value;
   }
 
   const withoutThaumasite = pasteAtTemperature(withData, added, ["thaumasite"]);
@@ -246,13 +251,14 @@ export function thaumasite(
       const present = { temperatureC: points[lost - 1].dose, paste: points[lost - 1].paste };
       const absent = { temperatureC: points[lost].dose, paste: points[lost].paste };
       const root = stabilityLimitTemperatureC(withoutThaumasite, "thaumasite", present, absent, options.toleranceC ?? DEFAULT_TOLERANCE_C, options.maxIterations ?? DEFAULT_MAX_ITERATIONS);
-      if (!root.ok) return { ok: false, error: { ...root.error, dose: root.error.temperatureC } };
-      stabilityLimit = { kind: "found", temperatureC: root.value.temperatureC, iterations: root.value.iterations, bracketC: [present.temperatureC, absent.temperatureC] };
+      stabilityLimit = root.ok
+        ? { kind: "found", temperatureC: root.value.temperatureC, iterations: root.value.iterations, bracketC: [present.temperatureC, absent.temperatureC] }
+        : { kind: "bracketed", bracketC: [present.temperatureC, absent.temperatureC], failure: `${root.error.code} at ${root.error.temperatureC} °C` };
     }
   }
 
   const service = points.find((p) => p.dose === serviceC)!.paste;
-  const serviceWithout = withoutThaumasite(serviceC, service);
+  const serviceWithout = withoutThaumasite(serviceC, byDistance(points, serviceC));
   if (!serviceWithout.ok) return { ok: false, error: { ...serviceWithout.error, dose: serviceC } };
   const siWithout = serviceWithout.value.assemblage.saturationIndices.thaumasite ?? Number.NEGATIVE_INFINITY;
   const thaumasiteMol = phaseMoles(service, "thaumasite");
@@ -298,7 +304,7 @@ export function thaumasite(
         thaumasiteStabilityTemperatureC: stabilityLimit.kind === "found" ? stabilityLimit.temperatureC : null,
         stabilityLimit,
         maximumThaumasiteVolumeCm3Per100gBinder: Math.max(0, ...points.map((p) => p.paste.volumes.thaumasite ?? 0)),
-        equilibriumChecks: { resolvedColdAtC, remainingSupersaturation },
+        equilibriumChecks: { retriedAtC, remainingSupersaturation, failedAtC },
       },
     },
   };

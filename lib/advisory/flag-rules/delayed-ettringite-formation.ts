@@ -27,7 +27,8 @@ export function delayedEttringiteFormationFlag(
   const s = result.summary;
   const curingC = context.curingMaxTemperatureC ?? s.curingTemperatureC ?? undefined;
   if (curingC === undefined) return undefined;
-  const stabilityC = s.ettringiteStabilityTemperatureC;
+  // A limit only bracketed by the sweep (root finding failed) is taken at the lower end of its bracket (conservative).
+  const stabilityC = s.ettringiteStabilityTemperatureC ?? (s.stabilityLimit.kind === "bracketed" ? s.stabilityLimit.bracketC[0] : null);
   const governingC = stabilityC === null ? SPECIFICATION_LIMIT_C : Math.min(stabilityC, SPECIFICATION_LIMIT_C);
   let severity: Severity;
   if (curingC > governingC) severity = "warning";
@@ -39,7 +40,9 @@ export function delayedEttringiteFormationFlag(
       ? `In this mix the engine finds ettringite stable up to ${f1(s.stabilityLimit.temperatureC)} °C.`
       : s.stabilityLimit.kind === "stable-throughout"
         ? `In this mix the engine finds ettringite stable over the whole range computed (up to ${f1(s.stabilityLimit.upToC)} °C).`
-        : "In this mix the engine finds no ettringite at any temperature computed.";
+        : s.stabilityLimit.kind === "bracketed"
+          ? `In this mix the engine finds ettringite stable up to between ${f1(s.stabilityLimit.bracketC[0])} and ${f1(s.stabilityLimit.bracketC[1])} °C (the root finding did not converge).`
+          : "In this mix the engine finds no ettringite at any temperature computed.";
   const dataCaveat =
     "The thermodynamic data used are known to make ettringite too stable at high temperature (about 1.3 log10 units at 85 °C), so the computed stability temperature is likely too high; " +
     "published studies of Portland pastes place it near 65–75 °C (Lothenbach et al. 2007; Taylor, Famy & Scrivener 2001).";

@@ -53,7 +53,9 @@ export function thaumasiteFormationFlag(
       ? `With this exposure the engine finds thaumasite stable up to ${f1(s.stabilityLimit.temperatureC)} °C.`
       : s.stabilityLimit.kind === "stable-throughout"
         ? `With this exposure the engine finds thaumasite stable over the whole range computed (up to ${f1(s.stabilityLimit.upToC)} °C); field experience puts most attack below about ${COLD_SERVICE_TEMPERATURE_C} °C, where it is fastest.`
-        : "";
+        : s.stabilityLimit.kind === "bracketed"
+          ? `With this exposure the engine finds thaumasite stable up to between ${f1(s.stabilityLimit.bracketC[0])} and ${f1(s.stabilityLimit.bracketC[1])} °C.`
+          : "";
   const explanation = [
     `At ${f1(s.serviceTemperatureC)} °C${s.serviceTemperatureClampedFromC !== null ? ` (the data set's lower limit; the service minimum is ${f1(s.serviceTemperatureClampedFromC)} °C)` : ""} the reaction ` +
       "6 Ca²⁺ + 2 SiO(OH)3⁻ + 2 SO4²⁻ + 2 CO3²⁻ + 2 OH⁻ + 26 H2O → thaumasite, Ca6Si2(SO4)2(CO3)2(OH)12·24H2O, " +

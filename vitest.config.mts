@@ -11,5 +11,7 @@ export default defineConfig({
     testTimeout: 60_000,
     hookTimeout: 180_000,
     pool: "forks",
+    // Clears last run's validation records and merges this run's into tests/artifacts/validation-dossier.json.
+    globalSetup: ["tests/support/validation-global-setup.ts"],
   },
 });

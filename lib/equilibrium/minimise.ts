@@ -26,6 +26,18 @@ export type MinimiseOptions = {
 
 export type MinimiseReport = { state: SolverState; iterations: number; phaseChanges: number; warmStarted: boolean };
 
+/** Saturation index (log10) a left-out phase may keep at the end; above it the search is retried. */
+const LEFT_OUT_TOLERANCE_LOG10 = 1e-6;
+/**
+ * Why a phase is left out for the rest of a search: its addition failed to converge or cycled (checked
+ * again at the end), or no regular phase set can hold it next to the present ones (the phase rule; where
+ * the remaining element potentials are not fixed by the phases, as in dry solid systems, its saturation
+ * index is not defined and is not checked).
+ */
+const BLOCKED_NUMERICALLY = 1;
+const BLOCKED_BY_PHASE_RULE = 2;
+/** How often the left-out phases are given another chance before the search fails. */
+const MAX_RESETS = 2;
 /** Saturation index threshold (log10 units) above which an absent phase is added. */
 const ADD_THRESHOLD_LOG10 = 1e-9;
 const LN10 = Math.log(10);
@@ -71,6 +83,7 @@ function run(
   let iterations = 0;
   let changes = 0;
   let lastAdded = -1;
+  let resets = 0;
   let beforeAdd: SolverState | undefined;
   for (;;) {
     if (performance.now() > deadline)
@@ -88,9 +101,16 @@ function run(
         }
       }
       if (lastAdded >= 0 && beforeAdd && changes < maxChanges) {
-        // The phase set with the last addition did not converge: go back and leave that phase out.
-        blocked[lastAdded] = 1;
-        Object.assign(s, cloneState(beforeAdd));
+        // The phase set with the last addition did not converge. It usually means the new phase should
+        // replace a present one (nearly degenerate AFm/AFt pairs): try each exchange from the last good
+        // state; if none converges, go back and leave the new phase out.
+        const exchanged = exchangeForAddition(p, beforeAdd, lastAdded, newtonOptions);
+        iterations += exchanged.iterations;
+        if (exchanged.state) Object.assign(s, exchanged.state);
+        else {
+          blocked[lastAdded] = BLOCKED_NUMERICALLY;
+          Object.assign(s, cloneState(beforeAdd));
+        }
         lastAdded = -1;
         beforeAdd = undefined;
         changes++;
@@ -141,6 +161,18 @@ function run(
       }
     });
     if (best < 0) {
+      // Phases left out on the way (a failed or cycling addition) must not be supersaturated at the end,
+      // or this is no minimum: give them another chance, a limited number of times, then fail.
+      let leftOutSupersaturated = false;
+      for (let k = 0; k < p.phases.length; k++) {
+        if (blocked[k] === BLOCKED_NUMERICALLY && !s.active[k] && phaseSaturationIndex(p, s, k) > LEFT_OUT_TOLERANCE_LOG10) leftOutSupersaturated = true;
+      }
+      if (leftOutSupersaturated) {
+        if (++resets > MAX_RESETS) return noConvergence(p, s, iterations, "a phase left out during the search is supersaturated at the end");
+        blocked.fill(0);
+        visits.clear();
+        continue;
+      }
       for (let k = 0; k < p.phases.length; k++) if (s.active[k] && s.amount[k] < 0 && p.phases[k].kind !== "reservoir") s.amount[k] = 0;
       return { ok: true, value: { state: s, iterations, phaseChanges: changes } };
     }
@@ -163,7 +195,7 @@ function run(
       }
       if (!swapped) {
         s.active[best] = 0;
-        blocked[best] = 1;
+        blocked[best] = BLOCKED_BY_PHASE_RULE;
         lastAdded = -1;
         beforeAdd = undefined;
       }
@@ -174,12 +206,42 @@ function run(
     if (seen > 3) {
       // The phase set cycles (nearly degenerate phases trading places): leave out the phase just added.
       if (lastAdded < 0 || !beforeAdd) return noConvergence(p, s, iterations, "the phase set cycles");
-      blocked[lastAdded] = 1;
+      blocked[lastAdded] = BLOCKED_NUMERICALLY;
       Object.assign(s, cloneState(beforeAdd));
       lastAdded = -1;
       beforeAdd = undefined;
     }
   }
+}
+
+/**
+ * From the last converged state, adds phase `k` and removes one present phase q, for each q in turn, and
+ * returns the first exchange whose Newton iteration converges with every amount non-negative.
+ */
+function exchangeForAddition(
+  p: EquilibriumProblem,
+  before: SolverState,
+  k: number,
+  newtonOptions: NewtonOptions,
+): { state?: SolverState; iterations: number } {
+  let iterations = 0;
+  for (let q = 0; q < p.phases.length; q++) {
+    if (!before.active[q] || q === k || p.phases[q].kind === "reservoir" || p.phases[q].kind === "aqueous") continue;
+    const trial = cloneState(before);
+    trial.active[q] = 0;
+    trial.amount[q] = 0;
+    trial.active[k] = 1;
+    trial.amount[k] = 0;
+    const outcome = solveFixedPhases(p, trial, { ...newtonOptions, maxIterations: Math.min(newtonOptions.maxIterations, 50) });
+    iterations += outcome.iterations;
+    if (!outcome.converged) continue;
+    let nonNegative = true;
+    trial.active.forEach((on, j) => {
+      if (on && p.phases[j].kind !== "reservoir" && trial.amount[j] / amountScale(p, j) < -1e-14) nonNegative = false;
+    });
+    if (nonNegative) return { state: trial, iterations };
+  }
+  return { iterations };
 }
 
 function noConvergence(p: EquilibriumProblem, s: SolverState, iterations: number, message: string): EquilibriumOutcome<never> {

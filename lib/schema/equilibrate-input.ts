@@ -11,7 +11,9 @@ export const equilibrateInput = z
       .min(0, { error: "temperatureC must be between 0 and 100 °C" })
       .max(100, { error: "temperatureC must be between 0 and 100 °C" }),
     components: z
-      .record(z.string().min(1), z.number({ error: "component amounts must be numbers" }).nonnegative({ error: "component amounts must be ≥ 0" }))
+      .record(z.string().min(1), z.number({ error: "component amounts must be numbers" }).nonnegative({ error: "component amounts must be ≥ 0" }), {
+        error: "components is required: an object of formula → amount",
+      })
       .refine((c) => Object.keys(c).length > 0, { error: "components must list at least one formula" }),
     unit: z.enum(["mol", "g"], { error: 'unit must be "mol" or "g"' }).default("mol"),
     fixedPartialPressuresBar: z

@@ -260,7 +260,8 @@ export function supersaturatedSolid(paste: HydratedPaste, base: Pick<ScenarioBas
 
 /**
  * One equilibrium of the base plus additions at a temperature, with extra phases suppressed, warm-started from a
- * neighbouring paste; re-solved cold when the warm-started result leaves an allowed solid supersaturated.
+ * neighbouring paste. When that start fails or leaves an allowed solid supersaturated, the next neighbours (at most
+ * three in all) and then a cold start are tried; the result with the least supersaturation is kept.
  */
 export function pasteAtTemperature(base: ScenarioBase, addedElementsMol: Record<string, number>, extraSuppressed: readonly string[]): PasteAt {
   const reacted = { ...base.composition.reactedElementsMol } as Record<string, number>;

@@ -208,4 +208,31 @@ describe.skipIf(chromiumMissing)("assessment flow in Chromium (skipped when /usr
     expect(pdf.subarray(0, 5).toString("latin1")).toBe("%PDF-");
     expect(pdfContainsText(pdf, PROJECT_NAME)).toBe(true);
   }, STEP_MS);
+
+  it("runs the demo scenario one click away and draws the element temperature with its limit", async () => {
+    const { page } = browser;
+    await page.goto(url("/"));
+    await page.getByRole("button", { name: "Load the demo scenario" }).click();
+    await page.getByText(/Demo scenario \(invented numbers\)/).waitFor();
+    await page.waitForFunction(() => (document.getElementById("f-project-name") as HTMLInputElement | null)?.value.includes("(demo)"), undefined, { timeout: 15_000 });
+    await runAndWaitForResults();
+    const temperature = page.locator('[data-chart="element-temperature"]');
+    await temperature.locator("svg.recharts-surface").first().waitFor();
+    expect(await temperature.innerText()).toContain("Delayed-ettringite limit 70 °C");
+    await screenshot(page, "demo-results");
+  }, STEP_MS);
+
+  it("runs a Monte Carlo assessment as a job with a progress bar and a cancel button", async () => {
+    const { page } = browser;
+    await fillAssessment("0.50");
+    await page.getByLabel("Monte Carlo run over the uncertain data", { exact: false }).check();
+    await typeInto(/^Samples/, "500");
+    await page.getByRole("button", { name: "Run the assessment" }).click();
+    await page.locator(".job-progress progress").waitFor({ timeout: 60_000 });
+    await screenshot(page, "monte-carlo-progress");
+    await page.getByRole("button", { name: "Cancel the run" }).click();
+    await page.getByText("The computation was cancelled.").waitFor();
+    // The page answered throughout: the form is usable again.
+    expect(await page.getByRole("button", { name: "Run the assessment" }).isEnabled()).toBe(true);
+  }, STEP_MS);
 });

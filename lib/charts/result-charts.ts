@@ -20,7 +20,8 @@ import { strengthMaturityChart, type MaturityPoint, type StrengthPoint } from ".
  * - element temperature, strength, maturity: `curing` — the curing advice (`temperature`, `strength`,
  *   `maturity`, `strengthTargets`); the DEF limit from `curing.limits.maxTemperatureC` or 70 °C (Taylor, Famy &
  *   Scrivener 2001, Cem. Concr. Res. 31, 683);
- * - RH–temperature map: `rhTemperatureMap` or `humidityTemperatureMap` — `[{ temperatureC, relativeHumidityPercent, state }]`.
+ * - RH–temperature map: `scenarios.drying.rhTemperatureMaps` — `[{ family, cells }]`, one chart per family; or
+ *   `rhTemperatureMap` / `humidityTemperatureMap` — `[{ temperatureC, relativeHumidityPercent, state }]`.
  */
 type Loose = Record<string, unknown>;
 
@@ -113,6 +114,19 @@ function timelineOf(result: Loose): TimelinePointVolumes[] {
     }));
 }
 
+const isCell = (c: unknown): c is RhTemperatureCell =>
+  isObject(c) && isNumber(c.temperatureC) && isNumber(c.relativeHumidityPercent) && typeof c.state === "string";
+
+/** The maps of the drying scenario: `scenarios.drying.rhTemperatureMaps: [{ family, cells }]`, one chart per family. */
+function familyMapsOf(result: Loose): { family: string; cells: RhTemperatureCell[] }[] {
+  const drying = isObject(result.scenarios) && isObject(result.scenarios.drying) ? result.scenarios.drying : undefined;
+  if (!drying || !Array.isArray(drying.rhTemperatureMaps)) return [];
+  return drying.rhTemperatureMaps
+    .filter((m): m is Loose => isObject(m) && typeof m.family === "string" && Array.isArray(m.cells))
+    .map((m) => ({ family: m.family as string, cells: (m.cells as unknown[]).filter(isCell) }))
+    .filter((m) => m.cells.length > 0);
+}
+
 function rhMapOf(result: Loose): RhTemperatureCell[] {
   const raw = first(result, ["rhTemperatureMap", "humidityTemperatureMap"]);
   const cells = isObject(raw) && Array.isArray(raw.cells) ? raw.cells : raw;
@@ -163,5 +177,6 @@ export function resultCharts(result: unknown): ChartData[] {
   charts.push(...curingCharts(result));
   const cells = rhMapOf(result);
   if (cells.length > 0) charts.push(rhTemperatureMapChart(cells));
+  for (const map of familyMapsOf(result)) charts.push(rhTemperatureMapChart(map.cells, map.family));
   return charts;
 }

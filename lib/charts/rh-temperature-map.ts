@@ -8,7 +8,7 @@ export type RhTemperatureCell = { temperatureC: number; relativeHumidityPercent:
  * (colour and marker) per stable state, so each point reads "at T and RH, this state is stable". Each row holds
  * the RH of its point under the series of its state and null under the others.
  */
-export function rhTemperatureMapChart(cells: readonly RhTemperatureCell[]): ChartData {
+export function rhTemperatureMapChart(cells: readonly RhTemperatureCell[], family?: string): ChartData {
   const states: string[] = [];
   for (const cell of cells) if (!states.includes(cell.state)) states.push(cell.state);
   const keyOf = (state: string) => `s${states.indexOf(state)}`;
@@ -18,8 +18,8 @@ export function rhTemperatureMapChart(cells: readonly RhTemperatureCell[]): Char
     return row;
   });
   return {
-    id: "rh-temperature-map",
-    title: "Stable states against relative humidity and temperature",
+    id: family ? `rh-temperature-map-${family.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-+|-+$/g, "")}` : "rh-temperature-map",
+    title: family ? `Stable states against relative humidity and temperature: ${family}` : "Stable states against relative humidity and temperature",
     kind: "scatter",
     x: { key: "temperatureC", label: "Temperature", unit: "°C", scale: "linear" },
     yLeft: { label: "Relative humidity", unit: "%" },

@@ -64,3 +64,22 @@ describe("result charts from the assess service's result shape", () => {
     expect(timeline.rows.map((r) => r[pore.key])).toEqual([20, 10]);
   });
 });
+
+describe("relative humidity–temperature maps of the drying scenario", () => {
+  it("draws one map per data family, named after it", () => {
+    const charts = resultCharts({
+      scenarios: {
+        drying: {
+          sweep: { id: "drying", title: "Drying", doseLabel: "Relative humidity", doseUnit: "%", points: [{ dose: 50, phaseVolumesCm3: { ettringite: 3 }, pH: null }] },
+          rhTemperatureMaps: [
+            { family: "Ettringite", members: ["ettringite", "metaettringite"], cells: [{ temperatureC: 20, relativeHumidityPercent: 50, state: "ettringite" }, { temperatureC: 60, relativeHumidityPercent: 10, state: "metaettringite" }] },
+            { family: "Monosulfate", members: [], cells: [] },
+          ],
+        },
+      },
+    });
+    expect(charts.map((c) => c.id)).toEqual(["sweep-drying", "rh-temperature-map-ettringite"]);
+    expect(charts[1].title).toContain("Ettringite");
+    expect(charts[1].series.map((s) => s.label)).toEqual(["ettringite", "metaettringite"]);
+  });
+});

@@ -165,7 +165,9 @@ function run(
       // or this is no minimum: give them another chance, a limited number of times, then fail.
       let leftOutSupersaturated = false;
       for (let k = 0; k < p.phases.length; k++) {
-        if (blocked[k] === BLOCKED_NUMERICALLY && !s.active[k] && phaseSaturationIndex(p, s, k) > LEFT_OUT_TOLERANCE_LOG10) leftOutSupersaturated = true;
+        // With the solution present every element potential is fixed, so even a phase-rule exclusion is checked.
+        const checked = blocked[k] === BLOCKED_NUMERICALLY || (blocked[k] === BLOCKED_BY_PHASE_RULE && p.aqueous >= 0 && s.active[p.aqueous] === 1);
+        if (checked && !s.active[k] && phaseSaturationIndex(p, s, k) > LEFT_OUT_TOLERANCE_LOG10) leftOutSupersaturated = true;
       }
       if (leftOutSupersaturated) {
         if (++resets > MAX_RESETS) return noConvergence(p, s, iterations, "a phase left out during the search is supersaturated at the end");

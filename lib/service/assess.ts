@@ -16,6 +16,14 @@ import { loadDataset, type Dataset } from "../data/load-dataset";
 import { describeFailure } from "../equilibrium/failure";
 import { phaseIds } from "../equilibrium/equilibrate";
 import { carbonationScenario, type CarbonationScenario } from "../scenarios/carbonation";
+import { chlorideBinding, exposureChlorideMgPerL, type ChlorideBindingScenario } from "../scenarios/chloride-binding";
+import { dryingScenario, type DryingScenario } from "../scenarios/drying";
+import { temperatureHistory, type TemperatureHistoryResult } from "../scenarios/temperature-history";
+import { thaumasite, type ThaumasiteResult } from "../scenarios/thaumasite";
+import { chlorideBindingLimitFlag } from "../advisory/flag-rules/chloride-binding-limit";
+import { delayedEttringiteFormationFlag } from "../advisory/flag-rules/delayed-ettringite-formation";
+import { ettringiteDehydrationFlag } from "../advisory/flag-rules/ettringite-dehydration";
+import { thaumasiteFormationFlag } from "../advisory/flag-rules/thaumasite-formation";
 import { sulfateIngress, type SulfateScenario } from "../scenarios/sulfate-ingress";
 import type { ScenarioBase } from "../scenarios/sweep";
 import { assessInput, binderInputOf, type AssessInput } from "../schema/assess-input";
@@ -28,6 +36,10 @@ import { createRng } from "../advisory/random";
 export type AssessmentScenarios = {
   sulfate?: SulfateScenario;
   carbonation?: CarbonationScenario;
+  temperature?: TemperatureHistoryResult;
+  thaumasite?: ThaumasiteResult;
+  chloride?: ChlorideBindingScenario;
+  drying?: DryingScenario;
 };
 
 export type AssessmentResult = {
@@ -106,15 +118,45 @@ function assessWithDataset(input: AssessInput, dataset: Dataset, points: number,
   const reserve = lowAlkalinityReserveFlag({ portlanditeKgPerM3: paste.value.perM3.portlanditeKg, carbonatableCaMolPerM3: paste.value.perM3.carbonatableCaMol, pH: paste.value.poreSolution?.pH ?? null });
   if (reserve) flags.push(reserve);
 
-  const exposureClasses = classifyExposure(exposure);
-  const compliance = checkCompliance({ waterBinderRatio: input.mix.waterBinderRatio, binderContentKgPerM3: input.mix.binderContentKgPerM3 }, exposureClasses);
-  flags.push(...compliance.flags);
-
+  // The curing peak: the element model's core peak when the thermal model is given, else the entered maximum.
   let curing: CuringAdvice | undefined;
   if (input.curing.thermal) {
     curing = adviseCuring(input.curing.thermal);
     flags.push(...curing.flags);
   }
+  const curingMaxTemperatureC = curing ? Math.max(curing.temperature.peakCoreC, input.curing.maxTemperatureC ?? -Infinity) : input.curing.maxTemperatureC;
+  const scenarioContext = { ...context, curingMaxTemperatureC };
+  const temperature = temperatureHistory(base, exposure, { points, curingMaxTemperatureC });
+  if (!temperature.ok) return domainError(temperature.error.code, `temperature scenario: ${temperature.error.message}`);
+  scenarios.temperature = temperature.value;
+  const def = delayedEttringiteFormationFlag(temperature.value, scenarioContext);
+  if (def) flags.push(def);
+
+  const thaumasiteResult = thaumasite(base, exposure, { points: Math.max(5, Math.round(points / 2)) });
+  if (!thaumasiteResult.ok) return domainError(thaumasiteResult.error.code, `thaumasite scenario: ${thaumasiteResult.error.message}`);
+  scenarios.thaumasite = thaumasiteResult.value;
+  const thaumasiteFlag = thaumasiteFormationFlag(thaumasiteResult.value, scenarioContext);
+  if (thaumasiteFlag) flags.push(thaumasiteFlag);
+
+  if (exposureChlorideMgPerL(exposure) !== null || exposure.deIcingSalts) {
+    const chloride = chlorideBinding(base, exposure, { points });
+    if (!chloride.ok) return domainError(chloride.error.code, `chloride scenario: ${chloride.error.message}`);
+    scenarios.chloride = chloride.value;
+    const chlorideFlag = chlorideBindingLimitFlag(chloride.value, scenarioContext);
+    if (chlorideFlag) flags.push(chlorideFlag);
+  }
+  if (exposure.relativeHumidityPercent !== undefined) {
+    const drying = dryingScenario(base, exposure, { points });
+    if (!drying.ok) return domainError(drying.error.code, `drying scenario: ${drying.error.message}`);
+    scenarios.drying = drying.value;
+    const dryingFlag = ettringiteDehydrationFlag(drying.value, scenarioContext);
+    if (dryingFlag) flags.push(dryingFlag);
+  }
+
+  const exposureClasses = classifyExposure(exposure);
+  const compliance = checkCompliance({ waterBinderRatio: input.mix.waterBinderRatio, binderContentKgPerM3: input.mix.binderContentKgPerM3 }, exposureClasses);
+  flags.push(...compliance.flags);
+
   const { state: _state, ...assemblageWithoutState } = paste.value.assemblage;
   return {
     ok: true,

@@ -16,6 +16,8 @@ describe("runAssessment", () => {
     const r = await runAssessment(input);
     if (!r.ok) throw new Error(JSON.stringify(r.error));
     for (const key of ["assemblage", "scenarios", "exposureClasses", "flags", "cautions"]) expect(r.value).toHaveProperty(key);
+    // Sulfate and humidity are given: every scenario that applies has run.
+    for (const key of ["sulfate", "carbonation", "temperature", "thaumasite", "drying"]) expect(r.value.scenarios).toHaveProperty(key);
     expect(r.value.cautions.join(" ")).toMatch(/guide/);
     const rank = { warning: 0, caution: 1, info: 2 } as const;
     const order = r.value.flags.map((f) => rank[f.severity]);

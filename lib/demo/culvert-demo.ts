@@ -43,7 +43,7 @@ export const culvertDemo: AssessInputRaw = {
     waterPH: 6.8,
     chlorideMgPerL: 120,
     co2Percent: 0.04,
-    serviceTemperatureC: 12,
+    serviceTemperatureC: 15,
     relativeHumidityPercent: 95,
     wetting: "wet-rarely-dry",
     freezing: { exposed: false },

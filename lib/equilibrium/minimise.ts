@@ -48,7 +48,7 @@ export function minimise(p: EquilibriumProblem, options: MinimiseOptions = {}): 
   const deadline = started + limitMs;
   const newtonOptions = {
     maxIterations: options.maxNewtonIterations ?? 200,
-    balanceTolerance: options.balanceTolerance ?? 1e-13,
+    balanceTolerance: options.balanceTolerance ?? 1e-12,
     conditionTolerance: options.conditionTolerance ?? 1e-11,
     deadline,
   };

@@ -299,7 +299,10 @@ export function solveFixedPhases(p: EquilibriumProblem, s: SolverState, o: Newto
     last = a;
     if (a.unsupportedElement !== undefined)
       return { converged: false, iterations: iteration, balanceResidual: a.balanceResidual, conditionResidual: a.conditionResidual, singular: false, unsupportedElement: a.unsupportedElement };
-    if (a.balanceResidual <= o.balanceTolerance && a.conditionResidual <= o.conditionTolerance)
+    // Converged at the tolerances; or, after many iterations, stalled at round-off (regularised steps of a
+    // dry assemblage) still a hundred times inside what the result promises (1e-10 relative balance).
+    const stalledAtRoundOff = iteration >= STALL_ITERATIONS && a.balanceResidual <= 100 * o.balanceTolerance && a.conditionResidual <= 100 * o.conditionTolerance;
+    if ((a.balanceResidual <= o.balanceTolerance && a.conditionResidual <= o.conditionTolerance) || stalledAtRoundOff)
       return { converged: true, iterations: iteration, balanceResidual: a.balanceResidual, conditionResidual: a.conditionResidual, singular: false };
     if (iteration === o.maxIterations || performance.now() > o.deadline) break;
     let delta = a.rhs.slice();
@@ -331,6 +334,9 @@ export function solveFixedPhases(p: EquilibriumProblem, s: SolverState, o: Newto
   }
   return { converged: false, iterations: o.maxIterations, balanceResidual: last?.balanceResidual ?? Infinity, conditionResidual: last?.conditionResidual ?? Infinity, singular: false };
 }
+
+/** Iterations after which a residual stuck near round-off counts as converged. */
+const STALL_ITERATIONS = 30;
 
 /** Phase amounts beyond 10⁶ times the total element amount are a diverging Newton iteration. */
 function divergenceLimit(p: EquilibriumProblem): number {

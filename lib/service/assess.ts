@@ -50,6 +50,8 @@ export type AssessmentResult = {
     timeline: TimelineEntry[];
   };
   scenarios: AssessmentScenarios;
+  /** Scenarios the engine could not complete, with the typed reason; the rest of the assessment stands. */
+  scenarioErrors: Partial<Record<keyof AssessmentScenarios, { code: string; message: string }>>;
   exposureClasses: ExposureClassification;
   compliance: ComplianceResult;
   curing?: CuringAdvice;
@@ -101,20 +103,25 @@ function assessWithDataset(input: AssessInput, dataset: Dataset, points: number,
     dataset,
   };
   const scenarios: AssessmentScenarios = {};
+  const scenarioErrors: AssessmentResult["scenarioErrors"] = {};
   const flags: Flag[] = [];
   const context = { exposure, waterBinderRatio: input.mix.waterBinderRatio, curingMaxTemperatureC: input.curing.maxTemperatureC };
 
   if (severeSulfateExposure(exposure).any || (exposure.sulfateMgPerL ?? 0) > 0) {
     const sulfate = sulfateIngress(base, exposure, { points });
-    if (!sulfate.ok) return domainError(sulfate.error.code, `sulfate scenario at ${sulfate.error.dose} mol: ${describeFailure(sulfate.error)}`);
-    scenarios.sulfate = sulfate.value;
-    for (const flag of [sulfateAttackFlag(sulfate.value, context), gypsumFormationFlag(sulfate.value), magnesiumSulfateAttackFlag(sulfate.value)]) if (flag) flags.push(flag);
+    if (!sulfate.ok) scenarioErrors.sulfate = { code: sulfate.error.code, message: `at ${(sulfate.error.dose * 1000).toFixed(1)} mmol SO4 per 100 g binder: ${describeFailure(sulfate.error)}` };
+    else {
+      scenarios.sulfate = sulfate.value;
+      for (const flag of [sulfateAttackFlag(sulfate.value, context), gypsumFormationFlag(sulfate.value), magnesiumSulfateAttackFlag(sulfate.value)]) if (flag) flags.push(flag);
+    }
   }
   const carbonation = carbonationScenario(base, exposure, { points, coverMm: input.project?.element?.coverMm });
-  if (!carbonation.ok) return domainError(carbonation.error.code, `carbonation scenario: ${describeFailure(carbonation.error)}`);
-  scenarios.carbonation = carbonation.value;
-  const depassivation = carbonationDepassivationFlag(carbonation.value, { exposure: { ...exposure, coverMm: exposure.coverMm ?? input.project?.element?.coverMm } });
-  if (depassivation) flags.push(depassivation);
+  if (!carbonation.ok) scenarioErrors.carbonation = { code: carbonation.error.code, message: describeFailure(carbonation.error) };
+  else {
+    scenarios.carbonation = carbonation.value;
+    const depassivation = carbonationDepassivationFlag(carbonation.value, { exposure: { ...exposure, coverMm: exposure.coverMm ?? input.project?.element?.coverMm } });
+    if (depassivation) flags.push(depassivation);
+  }
   const reserve = lowAlkalinityReserveFlag({ portlanditeKgPerM3: paste.value.perM3.portlanditeKg, carbonatableCaMolPerM3: paste.value.perM3.carbonatableCaMol, pH: paste.value.poreSolution?.pH ?? null });
   if (reserve) flags.push(reserve);
 
@@ -127,30 +134,38 @@ function assessWithDataset(input: AssessInput, dataset: Dataset, points: number,
   const curingMaxTemperatureC = curing ? Math.max(curing.temperature.peakCoreC, input.curing.maxTemperatureC ?? -Infinity) : input.curing.maxTemperatureC;
   const scenarioContext = { ...context, curingMaxTemperatureC };
   const temperature = temperatureHistory(base, exposure, { points, curingMaxTemperatureC });
-  if (!temperature.ok) return domainError(temperature.error.code, `temperature scenario: ${temperature.error.message}`);
-  scenarios.temperature = temperature.value;
-  const def = delayedEttringiteFormationFlag(temperature.value, scenarioContext);
-  if (def) flags.push(def);
+  if (!temperature.ok) scenarioErrors.temperature = { code: temperature.error.code, message: temperature.error.message };
+  else {
+    scenarios.temperature = temperature.value;
+    const def = delayedEttringiteFormationFlag(temperature.value, scenarioContext);
+    if (def) flags.push(def);
+  }
 
   const thaumasiteResult = thaumasite(base, exposure, { points: Math.max(5, Math.round(points / 2)) });
-  if (!thaumasiteResult.ok) return domainError(thaumasiteResult.error.code, `thaumasite scenario: ${thaumasiteResult.error.message}`);
-  scenarios.thaumasite = thaumasiteResult.value;
-  const thaumasiteFlag = thaumasiteFormationFlag(thaumasiteResult.value, scenarioContext);
-  if (thaumasiteFlag) flags.push(thaumasiteFlag);
+  if (!thaumasiteResult.ok) scenarioErrors.thaumasite = { code: thaumasiteResult.error.code, message: thaumasiteResult.error.message };
+  else {
+    scenarios.thaumasite = thaumasiteResult.value;
+    const thaumasiteFlag = thaumasiteFormationFlag(thaumasiteResult.value, scenarioContext);
+    if (thaumasiteFlag) flags.push(thaumasiteFlag);
+  }
 
   if (exposureChlorideMgPerL(exposure) !== null || exposure.deIcingSalts) {
     const chloride = chlorideBinding(base, exposure, { points });
-    if (!chloride.ok) return domainError(chloride.error.code, `chloride scenario: ${chloride.error.message}`);
-    scenarios.chloride = chloride.value;
-    const chlorideFlag = chlorideBindingLimitFlag(chloride.value, scenarioContext);
-    if (chlorideFlag) flags.push(chlorideFlag);
+    if (!chloride.ok) scenarioErrors.chloride = { code: chloride.error.code, message: chloride.error.message };
+    else {
+      scenarios.chloride = chloride.value;
+      const chlorideFlag = chlorideBindingLimitFlag(chloride.value, scenarioContext);
+      if (chlorideFlag) flags.push(chlorideFlag);
+    }
   }
   if (exposure.relativeHumidityPercent !== undefined) {
     const drying = dryingScenario(base, exposure, { points });
-    if (!drying.ok) return domainError(drying.error.code, `drying scenario: ${drying.error.message}`);
-    scenarios.drying = drying.value;
-    const dryingFlag = ettringiteDehydrationFlag(drying.value, scenarioContext);
-    if (dryingFlag) flags.push(dryingFlag);
+    if (!drying.ok) scenarioErrors.drying = { code: drying.error.code, message: drying.error.message };
+    else {
+      scenarios.drying = drying.value;
+      const dryingFlag = ettringiteDehydrationFlag(drying.value, scenarioContext);
+      if (dryingFlag) flags.push(dryingFlag);
+    }
   }
 
   const exposureClasses = classifyExposure(exposure);
@@ -163,11 +178,15 @@ function assessWithDataset(input: AssessInput, dataset: Dataset, points: number,
     value: {
       assemblage: { temperatureC, paste: { ...paste.value, assemblage: assemblageWithoutState }, timeline },
       scenarios,
+      scenarioErrors,
       exposureClasses,
       compliance,
       curing,
       flags: sortFlags(flags),
-      warnings: [...paste.value.warnings] as AssessmentResult["warnings"],
+      warnings: [
+        ...paste.value.warnings,
+        ...Object.entries(scenarioErrors).map(([scenario, e]) => ({ code: "scenario_failed", scenario, reason: e!.code, message: e!.message })),
+      ] as AssessmentResult["warnings"],
     },
   };
 }

@@ -60,7 +60,7 @@ function Axes({ chart }: { chart: ChartData }) {
       <Tooltip />
       <Legend verticalAlign="top" />
       {chart.thresholds.map((t) => (
-        <ReferenceLine key={t.label} yAxisId={t.axis} y={t.value} stroke="#B00020" strokeDasharray="6 4" label={{ value: t.label, position: "insideTopLeft" }} />
+        <ReferenceLine key={t.label} yAxisId={t.axis} y={t.value} ifOverflow="extendDomain" stroke="#B00020" strokeDasharray="6 4" label={{ value: t.label, position: "insideTopLeft" }} />
       ))}
     </>
   );
@@ -131,6 +131,9 @@ export function ChartPanel({ chart, height = 320 }: { chart: ChartData; height?:
       <figcaption id={titleId}>
         <h4>{chart.title}</h4>
         {chart.note ? <p className="hint">{chart.note}</p> : null}
+        {chart.thresholds.length > 0 ? (
+          <p className="hint">Limit lines (dashed): {chart.thresholds.map((t) => `${t.label} (${t.value} ${t.unit})`).join("; ")}.</p>
+        ) : null}
       </figcaption>
       <p className="visually-hidden">
         {`${chart.title}: ${chart.series.map((s) => s.label).join(", ")} against ${axisCaption(chart.x.label, chart.x.unit)}. The data table gives the values.`}

@@ -20,6 +20,7 @@ describe("chart panel", () => {
   it("shows the title, and a data table with units in the headings when asked", () => {
     render(<ChartPanel chart={chart} />);
     expect(screen.getByRole("heading", { name: "Element temperature" })).toBeTruthy();
+    expect(screen.getByText("Limit lines (dashed): Maximum 70 °C (70 °C).")).toBeTruthy();
     expect(screen.queryByRole("table")).toBeNull();
     const toggle = screen.getByRole("button", { name: "Show data table" });
     expect(toggle.getAttribute("aria-expanded")).toBe("false");

@@ -356,6 +356,7 @@ function ExposureSection() {
 function ThermalSection({ steam, setSteam, evaporation, setEvaporation }: { steam: boolean; setSteam: (v: boolean) => void; evaporation: boolean; setEvaporation: (v: boolean) => void }) {
   const { control } = useFormContextTyped();
   const ambientKind = useWatch({ control, name: "curing.thermal.ambient.kind" as never }) as string | undefined;
+  const geometry = useWatch({ control, name: "curing.thermal.element.geometry" as never }) as string | undefined;
   const cement = useWatch({ control, name: "binder.cement" });
   const phases = cementPhasesForThermalModel(cement as never);
   return (
@@ -394,6 +395,17 @@ function ThermalSection({ steam, setSteam, evaporation, setEvaporation }: { stea
           <NumberField name="curing.thermal.faces.a.windSpeedMPerS" label="Wind speed" unit="m/s" hint="0–30 m/s; default 2 m/s (typical light wind)." />
         </div>
       </fieldset>
+      {geometry === "two-faces" ? (
+        <fieldset className="subsection">
+          <legend>Formwork and insulation (face B)</legend>
+          <div className="row">
+            <SelectField name="curing.thermal.faces.b.cover" label="Cover while curing (face B)" choices={coverChoices} />
+            <NumberField name="curing.thermal.faces.b.stripAtH" label="Strip at (face B)" unit="h" hint="Hours after placement; empty keeps the cover." />
+            <SelectField name="curing.thermal.faces.b.coverAfterStrip" label="Cover after stripping (face B)" choices={coverChoices} />
+            <NumberField name="curing.thermal.faces.b.windSpeedMPerS" label="Wind speed (face B)" unit="m/s" hint="0–30 m/s; default 2 m/s." />
+          </div>
+        </fieldset>
+      ) : null}
       <div className="field checkbox">
         <input id="f-steam" type="checkbox" checked={steam} onChange={(e) => setSteam(e.target.checked)} />
         <label htmlFor="f-steam">Steam curing cycle</label>

@@ -75,4 +75,14 @@ describe("assessment form validation", () => {
     const legends = Array.from(document.querySelectorAll("fieldset.section > legend")).map((l) => l.textContent);
     expect(legends).toEqual(["1. Project and element", "2. Binder", "3. Mix", "4. Age", "5. Exposure", "6. Curing and climate", "7. Run options"]);
   });
+
+  it("shows the thermal model's fields when chosen, and a second face when the faces differ", async () => {
+    render(<AssessmentForm onSubmit={vi.fn()} />);
+    expect(screen.queryByLabelText(/^Placement temperature/)).toBeNull();
+    fireEvent.click(screen.getByLabelText("Compute it with the element thermal model"));
+    expect(await screen.findByLabelText(/^Placement temperature/)).toBeTruthy();
+    expect(screen.queryByText("Formwork and insulation (face B)")).toBeNull();
+    fireEvent.change(screen.getByLabelText("Faces"), { target: { value: "two-faces" } });
+    expect(await screen.findByText("Formwork and insulation (face B)")).toBeTruthy();
+  });
 });

@@ -24,7 +24,8 @@ export type PhaseAmount = {
 export type HydrationWarning =
   | BulkCompositionWarning
   | { code: "ionic_strength_beyond_activity_model"; ionicStrengthMolPerKg: number; validUpToMolPerKg: number }
-  | { code: "no_pore_solution"; message: string };
+  | { code: "no_pore_solution"; message: string }
+  | { code: "near_invariant_point"; message: string };
 
 /** The hydrated paste at one age, per 100 g binder, with the same figures per m³ of concrete. */
 export type HydratedPaste = {
@@ -124,6 +125,8 @@ export function hydratePaste(
   if (!uptake.ok) return uptake;
   const { assemblage, boundMol } = uptake.value;
   const warnings: HydrationWarning[] = [...composition.warnings];
+  if (assemblage.nearInvariant)
+    warnings.push({ code: "near_invariant_point", message: "the assemblage lies near an invariant point: phases within 0.01 log10 units of saturation may be left out" });
 
   // The bound alkali travel with the C-S-H as hydroxide (mass added, volume neglected: a few tenths of a cm³).
   const boundHydroxideG = Object.entries(boundMol).reduce((sum, [e, mol]) => sum + mol * molarMassGPerMol({ [e]: 1, O: 1, H: 1 }), 0);

@@ -24,7 +24,17 @@ export type MinimiseOptions = {
   warmStart?: SolverState;
 };
 
-export type MinimiseReport = { state: SolverState; iterations: number; phaseChanges: number; warmStarted: boolean };
+export type MinimiseReport = {
+  state: SolverState;
+  iterations: number;
+  phaseChanges: number;
+  warmStarted: boolean;
+  /**
+   * True when the phase search cycled near an invariant point and finished with the looser tolerance:
+   * absent phases may then be supersaturated by up to NEAR_INVARIANT_TOLERANCE_LOG10.
+   */
+  nearInvariant: boolean;
+};
 
 /** Saturation index (log10) a left-out phase may keep at the end; above it the search is retried. */
 const LEFT_OUT_TOLERANCE_LOG10 = 1e-6;
@@ -36,8 +46,16 @@ const LEFT_OUT_TOLERANCE_LOG10 = 1e-6;
  */
 const BLOCKED_NUMERICALLY = 1;
 const BLOCKED_BY_PHASE_RULE = 2;
+/**
+ * Near an invariant point (five AFm/AFt phases almost coexisting) the phase search can cycle between sets
+ * whose left-out member is supersaturated by a few thousandths. After a cycle the search adds, and
+ * checks, only above 0.01 log10 units (57 J/mol at 25 °C, far inside the ±0.3 log10 uncertainty of the
+ * hydrate data), and the result says so.
+ */
+export const NEAR_INVARIANT_TOLERANCE_LOG10 = 0.01;
 /** How often the left-out phases are given another chance before the search fails. */
 const MAX_RESETS = 2;
+const PHASE_ADDITION_PIVOT_TOLERANCE = 1e-7;
 /** Saturation index threshold (log10 units) above which an absent phase is added. */
 const ADD_THRESHOLD_LOG10 = 1e-9;
 const LN10 = Math.log(10);
@@ -58,8 +76,20 @@ export function minimise(p: EquilibriumProblem, options: MinimiseOptions = {}): 
   }
   const start = coldStart(p);
   if (!start.ok) return start;
-  const cold = run(p, start.value, newtonOptions, options, deadline, started, limitMs);
-  return cold.ok ? { ok: true, value: { ...cold.value, warmStarted: false } } : cold;
+  const cold = run(p, cloneState(start.value), newtonOptions, options, deadline, started, limitMs);
+  if (cold.ok || cold.error.code !== "no_convergence") return cold.ok ? { ok: true, value: { ...cold.value, warmStarted: false } } : cold;
+  // Near an invariant point the phase search can cycle from the LP's phase set. Start again from the
+  // solution alone (the LP's element potentials) so that solids enter one at a time by saturation index.
+  const solutionOnly = cloneState(start.value);
+  if (p.aqueous < 0 || !solutionOnly.active[p.aqueous]) return cold;
+  p.phases.forEach((phase, k) => {
+    if (phase.kind !== "aqueous" && phase.kind !== "reservoir") {
+      solutionOnly.active[k] = 0;
+      solutionOnly.amount[k] = 0;
+    }
+  });
+  const retry = run(p, solutionOnly, newtonOptions, options, deadline, started, limitMs);
+  return retry.ok ? { ok: true, value: { ...retry.value, warmStarted: false } } : cold;
 }
 
 function compatible(p: EquilibriumProblem, s: SolverState): boolean {
@@ -84,6 +114,7 @@ function run(
   let changes = 0;
   let lastAdded = -1;
   let resets = 0;
+  let cycled = false;
   let beforeAdd: SolverState | undefined;
   for (;;) {
     if (performance.now() > deadline)
@@ -137,7 +168,8 @@ function run(
       const relative = s.amount[k] / amountScale(p, k);
       if (!(relative < -1e-14)) return;
       const before = beforeAdd && beforeAdd.active[k] ? Math.max(0, beforeAdd.amount[k]) : 0;
-      const key = beforeAdd ? before / (before - s.amount[k]) : relative;
+      // Once cycling, the lowest-index negative phase leaves (Bland's rule), else the ratio test decides.
+      const key = cycled ? k : beforeAdd ? before / (before - s.amount[k]) : relative;
       if (key < worstKey) {
         worstKey = key;
         worst = k;
@@ -149,17 +181,20 @@ function run(
       s.amount[worst] = 0;
       continue;
     }
-    // Add the most supersaturated absent phase.
+    // Add the most supersaturated absent phase; once the phase set has cycled, the first supersaturated
+    // phase in a fixed order instead (the anti-cycling idea of Bland's rule, Bland 1977).
     let best = -1;
-    let bestIndex = ADD_THRESHOLD_LOG10;
-    p.phases.forEach((phase, k) => {
-      if (s.active[k] || phase.suppressed || blocked[k] || phase.kind === "reservoir") return;
+    let bestIndex = cycled ? NEAR_INVARIANT_TOLERANCE_LOG10 : ADD_THRESHOLD_LOG10;
+    for (let k = 0; k < p.phases.length; k++) {
+      const phase = p.phases[k];
+      if (s.active[k] || phase.suppressed || blocked[k] || phase.kind === "reservoir") continue;
       const si = phaseSaturationIndex(p, s, k);
       if (si > bestIndex) {
         bestIndex = si;
         best = k;
+        if (cycled) break;
       }
-    });
+    }
     if (best < 0) {
       // Phases left out on the way (a failed or cycling addition) must not be supersaturated at the end,
       // or this is no minimum: give them another chance, a limited number of times, then fail.
@@ -167,7 +202,7 @@ function run(
       for (let k = 0; k < p.phases.length; k++) {
         // With the solution present every element potential is fixed, so even a phase-rule exclusion is checked.
         const checked = blocked[k] === BLOCKED_NUMERICALLY || (blocked[k] === BLOCKED_BY_PHASE_RULE && p.aqueous >= 0 && s.active[p.aqueous] === 1);
-        if (checked && !s.active[k] && phaseSaturationIndex(p, s, k) > LEFT_OUT_TOLERANCE_LOG10) leftOutSupersaturated = true;
+        if (checked && !s.active[k] && phaseSaturationIndex(p, s, k) > (cycled ? NEAR_INVARIANT_TOLERANCE_LOG10 : LEFT_OUT_TOLERANCE_LOG10)) leftOutSupersaturated = true;
       }
       if (leftOutSupersaturated) {
         if (++resets > MAX_RESETS) return noConvergence(p, s, iterations, "a phase left out during the search is supersaturated at the end");
@@ -176,7 +211,7 @@ function run(
         continue;
       }
       for (let k = 0; k < p.phases.length; k++) if (s.active[k] && s.amount[k] < 0 && p.phases[k].kind !== "reservoir") s.amount[k] = 0;
-      return { ok: true, value: { state: s, iterations, phaseChanges: changes } };
+      return { ok: true, value: { state: s, iterations, phaseChanges: changes, nearInvariant: cycled } };
     }
     if (++changes > maxChanges) return noConvergence(p, s, iterations, "too many phase changes");
     beforeAdd = cloneState(s);
@@ -205,8 +240,11 @@ function run(
     const key = activeIds(p, s).join("|");
     const seen = (visits.get(key) ?? 0) + 1;
     visits.set(key, seen);
-    if (seen > 3) {
-      // The phase set cycles (nearly degenerate phases trading places): leave out the phase just added.
+    if (seen > 1 && !cycled) {
+      cycled = true;
+      visits.clear();
+    } else if (seen > 3) {
+      // Still cycling under the fixed order: leave out the phase just added (checked again at the end).
       if (lastAdded < 0 || !beforeAdd) return noConvergence(p, s, iterations, "the phase set cycles");
       blocked[lastAdded] = BLOCKED_NUMERICALLY;
       Object.assign(s, cloneState(beforeAdd));
@@ -218,7 +256,8 @@ function run(
 
 /**
  * From the last converged state, adds phase `k` and removes one present phase q, for each q in turn, and
- * returns the first exchange whose Newton iteration converges with every amount non-negative.
+ * returns, of the exchanges whose Newton iteration converges with every amount non-negative, the one of
+ * lowest Gibbs energy.
  */
 function exchangeForAddition(
   p: EquilibriumProblem,
@@ -227,6 +266,8 @@ function exchangeForAddition(
   newtonOptions: NewtonOptions,
 ): { state?: SolverState; iterations: number } {
   let iterations = 0;
+  let best: SolverState | undefined;
+  let bestGibbs = Infinity;
   for (let q = 0; q < p.phases.length; q++) {
     if (!before.active[q] || q === k || p.phases[q].kind === "reservoir" || p.phases[q].kind === "aqueous") continue;
     const trial = cloneState(before);
@@ -241,9 +282,16 @@ function exchangeForAddition(
     trial.active.forEach((on, j) => {
       if (on && p.phases[j].kind !== "reservoir" && trial.amount[j] / amountScale(p, j) < -1e-14) nonNegative = false;
     });
-    if (nonNegative) return { state: trial, iterations };
+    if (!nonNegative) continue;
+    // Of the exchanges that work, the one of lowest Gibbs energy, G/RT = Σ b_j λ_j.
+    let gibbs = 0;
+    for (let j = 0; j < p.totals.length; j++) gibbs += p.totals[j] * trial.lambda[j];
+    if (gibbs < bestGibbs) {
+      bestGibbs = gibbs;
+      best = trial;
+    }
   }
-  return { iterations };
+  return { state: best, iterations };
 }
 
 function noConvergence(p: EquilibriumProblem, s: SolverState, iterations: number, message: string): EquilibriumOutcome<never> {
@@ -293,7 +341,7 @@ function isSingular(p: EquilibriumProblem, s: SolverState): boolean {
     }
   }
   const a = assemble(p, s);
-  return !solveInPlace(a.matrix, a.rhs, a.size);
+  return !solveInPlace(a.matrix, a.rhs, a.size, PHASE_ADDITION_PIVOT_TOLERANCE);
 }
 
 /** A typical magnitude of a phase amount, to judge "negative" relative to the system size. */

@@ -38,6 +38,8 @@ export type EquilibriumResult = {
   iterations: number;
   phaseChanges: number;
   warmStarted: boolean;
+  /** The phase search ended near an invariant point: absent phases may be supersaturated by up to 0.01 (log10). */
+  nearInvariant: boolean;
   /** Largest |Σ a_ij n_i − b_j| / b_j over the elements. */
   massBalanceResidual: number;
   units: { elementPotentials: "J/mol"; molality: "mol/kg"; volumeCm3: "cm3"; grams: "g" };
@@ -124,7 +126,7 @@ export function balanceResidual(p: EquilibriumProblem, n: Float64Array): number 
 export function buildResult(
   p: EquilibriumProblem,
   s: SolverState,
-  meta: { iterations: number; phaseChanges: number; warmStarted: boolean },
+  meta: { iterations: number; phaseChanges: number; warmStarted: boolean; nearInvariant?: boolean },
 ): EquilibriumResult {
   const rt = GAS_CONSTANT_J_PER_MOL_K * p.temperatureK;
   const n = speciesAmounts(p, s);
@@ -198,6 +200,7 @@ export function buildResult(
     iterations: meta.iterations,
     phaseChanges: meta.phaseChanges,
     warmStarted: meta.warmStarted,
+    nearInvariant: meta.nearInvariant ?? false,
     massBalanceResidual: balanceResidual(p, n),
     units: { elementPotentials: "J/mol", molality: "mol/kg", volumeCm3: "cm3", grams: "g" },
     state: serializeState(p, s),

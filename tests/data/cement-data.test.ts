@@ -126,7 +126,7 @@ describe("solubility products at 25 °C from the formation data against independ
     for (const t of [273.15, 298.15, 323.15, 373.15]) expect(Math.abs(log10KAt("sio2-am", t, "SiO2(aq)") - reference(t)), `${t} K`).toBeLessThan(0.1);
   });
 
-  it("brucite = Mg+2 + 2 OH-: log K within 0.3 of −11.16 (Hummel et al. 2002, Nagra/PSI database 01/01; from memory)", () => {
+  it("brucite = Mg+2 + 2 OH-: log K within 0.3 of −11.16 (Hummel et al. 2002, chemical thermodynamic data compilation; from memory)", () => {
     expect(Math.abs(log10KAt("brucite", 298.15) - -11.16)).toBeLessThan(0.3);
   });
 

@@ -1,14 +1,5 @@
-import { healthReport } from "@/lib/service/health";
-import { guarded, jsonResponse, methodNotAllowed } from "@/lib/service/http";
+// Unversioned alias of GET /api/v1/health: the same handlers (route segment options must stay literal here).
+export { GET, POST, PUT, PATCH, DELETE } from "../v1/health/route";
 
 export const runtime = "nodejs";
 export const dynamic = "force-dynamic";
-
-/** Unversioned alias of GET /api/v1/health. */
-export const GET = guarded(() => jsonResponse(200, healthReport()));
-
-// Other methods: 405 with a JSON body (Next would answer with an empty one).
-export const POST = methodNotAllowed(["GET"]);
-export const PUT = methodNotAllowed(["GET"]);
-export const PATCH = methodNotAllowed(["GET"]);
-export const DELETE = methodNotAllowed(["GET"]);

@@ -1,4 +1,5 @@
 import { runAssessment } from "../../service/assess";
+import { printServiceError } from "../print-service-error";
 import { readJsonInput } from "../read-input";
 
 export const summary = "durability assessment: assemblage, scenarios, exposure classes, flags and cautions";
@@ -17,14 +18,7 @@ export async function run(args: string[]): Promise<number> {
   const outcome = await runAssessment(input.value, {
     onProgress: args.includes("--progress") ? (f) => process.stderr.write(`progress ${(100 * f).toFixed(0)} %\n`) : undefined,
   });
-  if (!outcome.ok) {
-    if (outcome.error.kind === "validation") {
-      for (const issue of outcome.error.issues) process.stderr.write(`${issue.path}: ${issue.message}\n`);
-      return 2;
-    }
-    process.stderr.write(`${outcome.error.code}: ${outcome.error.message}\n`);
-    return 1;
-  }
+  if (!outcome.ok) return printServiceError(outcome.error);
   process.stdout.write(JSON.stringify(outcome.value, null, 2) + "\n");
   return 0;
 }

@@ -1,4 +1,5 @@
 import { runHydrate } from "../../service/hydrate";
+import { printServiceError } from "../print-service-error";
 import { readJsonInput } from "../read-input";
 
 export const summary = "hydrate assemblage, volumes, pore solution and timeline of a binder, mix and age";
@@ -17,14 +18,7 @@ export async function run(args: string[]): Promise<number> {
   const raw = input.value as Record<string, unknown>;
   const withTimeline = raw && typeof raw === "object" && !("timeline" in raw) ? { ...raw, timeline: {} } : raw;
   const outcome = runHydrate(withTimeline);
-  if (!outcome.ok) {
-    if (outcome.error.kind === "validation") {
-      for (const issue of outcome.error.issues) process.stderr.write(`${issue.path}: ${issue.message}\n`);
-      return 2;
-    }
-    process.stderr.write(`${outcome.error.code}: ${outcome.error.message}\n`);
-    return 1;
-  }
+  if (!outcome.ok) return printServiceError(outcome.error);
   const { state: _state, ...assemblage } = outcome.value.assemblage;
   process.stdout.write(JSON.stringify({ ...outcome.value, assemblage }, null, 2) + "\n");
   return 0;

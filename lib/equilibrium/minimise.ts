@@ -55,6 +55,11 @@ const BLOCKED_BY_PHASE_RULE = 2;
 export const NEAR_INVARIANT_TOLERANCE_LOG10 = 0.01;
 /** How often the left-out phases are given another chance before the search fails. */
 const MAX_RESETS = 2;
+/**
+ * Smallest pivot (after row equilibration) the Newton matrix may have when a phase is added; below it the
+ * phase set is treated as breaking the phase rule. Looser than the 1e-12 of a Newton step, so nearly
+ * dependent sets (which make Newton steps explode) are swapped rather than tried (tuned on this data set).
+ */
 const PHASE_ADDITION_PIVOT_TOLERANCE = 1e-7;
 /** Saturation index threshold (log10 units) above which an absent phase is added. */
 const ADD_THRESHOLD_LOG10 = 1e-9;

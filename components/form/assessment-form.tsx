@@ -7,8 +7,11 @@ import { assessInput, type AssessInput, type AssessInputRaw } from "../../lib/sc
 import { culvertDemo, DEMO_LABEL } from "../../lib/demo/culvert-demo";
 import { CheckboxField, ModeRadios, NumberField, SelectField, TextField } from "./fields";
 import { OxideFields } from "./oxide-fields";
+import { AmbientSeriesFields } from "./ambient-series-fields";
+import { ServiceTemperatureFields, serviceTemperatureModeOf, type ServiceTemperatureMode } from "./service-temperature-fields";
+import { StrengthTargetFields } from "./strength-target-fields";
 import { ErrorSummary } from "./error-summary";
-import { flattenFormErrors } from "./form-errors";
+import { flattenFormErrors, withoutUnionMessageBesideBounds } from "./form-errors";
 import { cementPhasesForThermalModel, prepareAssessInput } from "./prepare-input";
 import { newAssessmentDefaults } from "./default-values";
 import {
@@ -27,8 +30,10 @@ import {
 const schemaResolver = zodResolver(assessInput);
 
 /** Completes the derived fields, then validates with the shared schema (the same one the API and CLI use). */
-const resolver: Resolver<AssessInputRaw, unknown, AssessInput> = (values, context, options) =>
-  schemaResolver(prepareAssessInput(values) as AssessInputRaw, context, options as never) as ReturnType<Resolver<AssessInputRaw, unknown, AssessInput>>;
+const resolver: Resolver<AssessInputRaw, unknown, AssessInput> = async (values, context, options) => {
+  const result = await schemaResolver(prepareAssessInput(values) as AssessInputRaw, context, options as never);
+  return { ...result, errors: withoutUnionMessageBesideBounds(result.errors, "exposure.serviceTemperatureC") } as Awaited<ReturnType<Resolver<AssessInputRaw, unknown, AssessInput>>>;
+};
 
 export type AssessmentFormProps = {
   onSubmit: (input: AssessInput) => void | Promise<void>;
@@ -51,6 +56,7 @@ export function AssessmentForm({ onSubmit, initialValues, busy = false, submitLa
   const [steam, setSteam] = useState(Boolean(initialValues?.curing?.thermal?.steamCuring));
   const [evaporation, setEvaporation] = useState(Boolean(initialValues?.curing?.thermal?.evaporation));
   const [monteCarlo, setMonteCarlo] = useState(Boolean(initialValues?.options?.monteCarlo));
+  const [serviceTemperatureMode, setServiceTemperatureMode] = useState<ServiceTemperatureMode>(serviceTemperatureModeOf(initialValues?.exposure?.serviceTemperatureC));
   const [demoLoaded, setDemoLoaded] = useState(false);
   const summaryRef = useRef<HTMLDivElement>(null);
   const issues = flattenFormErrors(formState.errors);
@@ -76,6 +82,7 @@ export function AssessmentForm({ onSubmit, initialValues, busy = false, submitLa
     setSteam(false);
     setEvaporation(false);
     setMonteCarlo(false);
+    setServiceTemperatureMode(serviceTemperatureModeOf(culvertDemo.exposure.serviceTemperatureC));
     setPendingReset(structuredClone(culvertDemo));
     setDemoLoaded(true);
   };
@@ -103,7 +110,7 @@ export function AssessmentForm({ onSubmit, initialValues, busy = false, submitLa
         <BinderSection />
         <MixSection />
         <AgeSection />
-        <ExposureSection />
+        <ExposureSection serviceTemperatureMode={serviceTemperatureMode} setServiceTemperatureMode={setServiceTemperatureMode} />
 
         <fieldset className="section">
           <legend>6. Curing and climate</legend>
@@ -303,7 +310,7 @@ function AgeSection() {
   );
 }
 
-function ExposureSection() {
+function ExposureSection({ serviceTemperatureMode, setServiceTemperatureMode }: { serviceTemperatureMode: ServiceTemperatureMode; setServiceTemperatureMode: (mode: ServiceTemperatureMode) => void }) {
   return (
     <fieldset className="section">
       <legend>5. Exposure</legend>
@@ -335,9 +342,9 @@ function ExposureSection() {
         <legend>Air, climate and water</legend>
         <div className="row">
           <NumberField name="exposure.co2Percent" label="CO₂ in air" unit="% by volume" hint="Default 0.04 % (about 420 µmol/mol outdoors; from memory)." />
-          <NumberField name="exposure.serviceTemperatureC" label="Service temperature" unit="°C" hint="−60 to 80 °C; mean temperature in service." />
           <NumberField name="exposure.relativeHumidityPercent" label="Relative humidity" unit="%" hint="0–100 %." />
         </div>
+        <ServiceTemperatureFields mode={serviceTemperatureMode} onModeChange={setServiceTemperatureMode} />
         <div className="row">
           <SelectField name="exposure.wetting" label="Wetting" choices={wettingChoices} emptyLabel="not stated" />
           <CheckboxField name="exposure.freezing.exposed" label="Freeze–thaw cycles in service" />
@@ -375,13 +382,15 @@ function ThermalSection({ steam, setSteam, evaporation, setEvaporation }: { stea
       </div>
       <fieldset className="subsection">
         <legend>Ambient profile</legend>
-        <ModeRadios name="curing.thermal.ambient.kind" legend="Air temperature" choices={[{ value: "constant", label: "constant" }, { value: "daily-sine", label: "daily cycle" }]} />
+        <ModeRadios name="curing.thermal.ambient.kind" legend="Air temperature" choices={[{ value: "constant", label: "constant" }, { value: "daily-sine", label: "daily cycle" }, { value: "series", label: "entered series (hour, °C)" }]} />
         {ambientKind === "daily-sine" ? (
           <div className="row">
             <NumberField name="curing.thermal.ambient.meanC" label="Daily mean" unit="°C" required hint="−40 to 50 °C." />
             <NumberField name="curing.thermal.ambient.amplitudeC" label="Amplitude" unit="°C" required hint="0–25 °C (half the daily range)." />
             <NumberField name="curing.thermal.ambient.placementHourOfDay" label="Placement hour" unit="h" hint="0–24; default 8 h (typical morning placement)." />
           </div>
+        ) : ambientKind === "series" ? (
+          <AmbientSeriesFields />
         ) : (
           <NumberField name="curing.thermal.ambient.temperatureC" label="Air temperature" unit="°C" required hint="−40 to 50 °C." />
         )}
@@ -427,6 +436,7 @@ function ThermalSection({ steam, setSteam, evaporation, setEvaporation }: { stea
           <NumberField name="curing.thermal.durationH" label="Simulated time" unit="h" hint="1–2160 h; default 168 h (one week)." />
         </div>
       </fieldset>
+      <StrengthTargetFields />
       <div className="field checkbox">
         <input id="f-evaporation" type="checkbox" checked={evaporation} onChange={(e) => setEvaporation(e.target.checked)} />
         <label htmlFor="f-evaporation">Check plastic-shrinkage evaporation (weather at placement)</label>

@@ -44,3 +44,32 @@ const DERIVED_FIELD_SOURCES: Record<string, string> = {
 export function inputPathFor(path: string): string {
   return DERIVED_FIELD_SOURCES[path] ?? path;
 }
+
+/**
+ * For a field the schema takes as a number or `{ minC, maxC }` (the service temperature), the resolver reports a
+ * failed range twice: once at the field, with the single-number branch's message, and again at the bound. When a
+ * bound has its own error the field-level message is dropped, so the engineer sees only the one about the bound.
+ * Returns a copy; the input is not changed.
+ */
+export function withoutUnionMessageBesideBounds<T>(errors: T, path: string, bounds: readonly string[] = ["minC", "maxC"]): T {
+  const keys = path.split(".");
+  let node: unknown = errors;
+  for (const key of keys) node = node && typeof node === "object" ? (node as Record<string, unknown>)[key] : undefined;
+  if (!node || typeof node !== "object" || !bounds.some((b) => (node as Record<string, unknown>)[b])) return errors;
+  const copy = structuredCloneErrors(errors) as Record<string, unknown>;
+  let target: Record<string, unknown> = copy;
+  for (const key of keys) target = target[key] as Record<string, unknown>;
+  delete target.message;
+  delete target.type;
+  delete target.types;
+  return copy as T;
+}
+
+/** A copy of the plain objects of an error tree; DOM `ref`s are kept by reference (they cannot be cloned). */
+function structuredCloneErrors(value: unknown): unknown {
+  if (!value || typeof value !== "object" || (typeof Node !== "undefined" && value instanceof Node)) return value;
+  if (Array.isArray(value)) return value.map(structuredCloneErrors);
+  const out: Record<string, unknown> = {};
+  for (const [k, v] of Object.entries(value)) out[k] = k === "ref" ? v : structuredCloneErrors(v);
+  return out;
+}

@@ -61,10 +61,16 @@ export function prepareAssessInput(values: Loose): Loose {
       scm.composition = { kind: "preset", presetId: preset?.id ?? scm.composition.presetId };
     }
   }
+  // A range with neither bound typed is a service temperature not given.
+  const service = out.exposure?.serviceTemperatureC;
+  if (service !== null && typeof service === "object" && service.minC === undefined && service.maxC === undefined) delete out.exposure.serviceTemperatureC;
   const cover = out.project?.element?.coverMm;
   if (out.exposure && typeof cover === "number" && out.exposure.coverMm === undefined) out.exposure.coverMm = cover;
   const thermal = out.curing?.thermal;
   if (thermal) {
+    // Rows left wholly empty are dropped; a half-filled row stays, so the schema names the missing value.
+    if (Array.isArray(thermal.ambient?.points)) thermal.ambient.points = (thermal.ambient.points as Loose[]).filter((p) => p && !(p.timeH === undefined && p.temperatureC === undefined));
+    if (Array.isArray(thermal.strengthTargets)) thermal.strengthTargets = (thermal.strengthTargets as Loose[]).filter((t) => t && !(t.label === undefined && t.strengthMPa === undefined));
     thermal.element = { ...(thermal.element ?? {}), thicknessM: out.project?.element?.thicknessM };
     thermal.concrete = {
       ...(thermal.concrete ?? {}),

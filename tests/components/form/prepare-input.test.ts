@@ -46,4 +46,20 @@ describe("form values completed for the schema", () => {
     expect(out.mix.aggregateVolume).toBeUndefined();
     expect(out.binder.supplementaryMaterials[0].composition).toEqual({ kind: "preset", presetId: "siliceous-fly-ash-typical" });
   });
+
+  it("drops wholly empty series points and strength targets and a range with neither bound, keeping half-filled rows for the schema to name", () => {
+    const out = prepareAssessInput({
+      exposure: { serviceTemperatureC: { minC: undefined, maxC: undefined } },
+      curing: {
+        thermal: {
+          ambient: { kind: "series", points: [{ timeH: 0, temperatureC: 10 }, { timeH: undefined, temperatureC: undefined }, { timeH: 5, temperatureC: undefined }] },
+          strengthTargets: [{ label: undefined, strengthMPa: undefined }, { label: "stripping", strengthMPa: 10 }, { label: undefined, strengthMPa: 25 }],
+        },
+      },
+    });
+    expect(out.exposure).not.toHaveProperty("serviceTemperatureC");
+    expect(out.curing.thermal.ambient.points).toEqual([{ timeH: 0, temperatureC: 10 }, { timeH: 5, temperatureC: undefined }]);
+    expect(out.curing.thermal.strengthTargets).toEqual([{ label: "stripping", strengthMPa: 10 }, { label: undefined, strengthMPa: 25 }]);
+    expect(prepareAssessInput({ exposure: { serviceTemperatureC: { minC: 3, maxC: undefined } } }).exposure.serviceTemperatureC).toEqual({ minC: 3, maxC: undefined });
+  });
 });

@@ -2,6 +2,7 @@
 
 import { cautionsOf, flagsOf, keyFigures } from "../../lib/report/key-figures";
 import { resultCharts } from "../../lib/charts/result-charts";
+import { withPhaseLabels } from "../../lib/charts/phase-labels";
 import { cautionTextsFor } from "../../lib/advisory/cautions";
 import { CautionList, FlagList } from "./flag-list";
 import { ChartPanel } from "./chart-panel";
@@ -16,7 +17,8 @@ export function ResultsView({ result, heading = "Results" }: { result: unknown; 
   const flags = flagsOf(result);
   const cautions = cautionsOf(result);
   const figures = keyFigures(result);
-  const charts = resultCharts(result);
+  // Phase ids become readable names in legends, data tables and CSV columns alike.
+  const charts = resultCharts(result).map(withPhaseLabels);
   return (
     <section className="results" aria-labelledby="results-title">
       <h2 id="results-title" tabIndex={-1}>

@@ -1,6 +1,6 @@
 // @vitest-environment jsdom
 import { describe, it, expect, afterEach, beforeAll } from "vitest";
-import { cleanup, render, screen } from "@testing-library/react";
+import { cleanup, fireEvent, render, screen, within } from "@testing-library/react";
 import { ResultsView } from "../../../components/results/results-view";
 import { cautionTextsFor } from "../../../lib/advisory/cautions";
 
@@ -39,5 +39,15 @@ describe("results view", () => {
   it("always shows the cautions, the standard assessment ones when the result carries none", () => {
     render(<ResultsView result={{ flags: [] }} />);
     for (const text of cautionTextsFor("assessment")) expect(screen.getByText(text)).toBeTruthy();
+  });
+
+  it("names the phases readably in the chart's data table (csh → C-S-H, monosulfate-14 → Monosulfate (14 H2O))", () => {
+    const withIds = { ...result, assemblage: { phases: [{ id: "csh", volumeCm3: 20 }, { id: "monosulfate-14", volumeCm3: 3 }, { id: "new-phase", volumeCm3: 1 }], poreSolutionCm3: 8, pH: 13.2 } };
+    render(<ResultsView result={withIds} />);
+    const figure = screen.getByRole("heading", { name: "Phase volumes of the hydrate assemblage" }).closest("figure")!;
+    fireEvent.click(within(figure as HTMLElement).getByRole("button", { name: "Show data table" }));
+    const headings = within(figure as HTMLElement).getAllByRole("columnheader").map((h) => h.textContent);
+    expect(headings).toEqual(expect.arrayContaining([expect.stringContaining("C-S-H"), expect.stringContaining("Monosulfate (14 H2O)"), expect.stringContaining("new-phase")]));
+    expect(headings.some((h) => h?.startsWith("csh"))).toBe(false);
   });
 });

@@ -1,0 +1,72 @@
+import type { ChartData } from "./chart-data";
+
+/**
+ * Readable names of the solid phases for legends, table headings and CSV columns. The ids are the data set's
+ * (lowercase, kebab-case; see `lib/data/cement/*.json` and `lib/data/starter/solids.json`); the names are the
+ * mineral names and the cement chemist notation of the trade (common practice). Hydrate water in brackets
+ * follows the notation of the phase (C₄AsH₁₄ → 14 H2O).
+ */
+const PHASE_LABELS: Readonly<Record<string, string>> = {
+  csh: "C-S-H",
+  msh: "M-S-H",
+  portlandite: "Portlandite",
+  calcite: "Calcite",
+  aragonite: "Aragonite",
+  dolomite: "Dolomite",
+  magnesite: "Magnesite",
+  brucite: "Brucite",
+  gypsum: "Gypsum",
+  bassanite: "Bassanite",
+  anhydrite: "Anhydrite",
+  syngenite: "Syngenite",
+  quartz: "Quartz",
+  "sio2-am": "Amorphous SiO₂",
+  gibbsite: "Gibbsite",
+  "al(oh)3-am": "Amorphous Al(OH)₃",
+  goethite: "Goethite",
+  hematite: "Hematite",
+  ferrihydrite: "Ferrihydrite",
+  hydrotalcite: "Hydrotalcite",
+  ettringite: "Ettringite",
+  "fe-ettringite": "Fe-ettringite",
+  metaettringite: "Metaettringite",
+  thaumasite: "Thaumasite",
+  "monosulfate-10.5": "Monosulfate (10.5 H2O)",
+  "monosulfate-12": "Monosulfate (12 H2O)",
+  "monosulfate-14": "Monosulfate (14 H2O)",
+  "fe-monosulfate": "Fe-monosulfate",
+  monocarbonate: "Monocarbonate",
+  "fe-monocarbonate": "Fe-monocarbonate",
+  hemicarbonate: "Hemicarbonate",
+  "friedel-salt": "Friedel's salt",
+  "kuzel-salt": "Kuzel's salt",
+  c2ah8: "C₂AH₈",
+  c4ah13: "C₄AH₁₃",
+  c4ah19: "C₄AH₁₉",
+  stratlingite: "Strätlingite",
+  katoite: "Katoite",
+  "fe-katoite": "Fe-katoite",
+  "siliceous-hydrogarnet": "Siliceous hydrogarnet",
+  "fe-siliceous-hydrogarnet": "Fe-siliceous hydrogarnet",
+};
+
+/** End-members of the C-S-H and M-S-H solid solutions, named by their molar Ca/Si or Mg/Si (`csh-ca1.67-si1`). */
+const END_MEMBER = /^(csh|msh)-(ca|mg)(\d+(?:\.\d+)?)-si(\d+(?:\.\d+)?)$/;
+
+/** The readable name of a phase id (`csh` → "C-S-H"); an id without one is returned as it is. */
+export function phaseLabel(id: string): string {
+  if (Object.prototype.hasOwnProperty.call(PHASE_LABELS, id)) return PHASE_LABELS[id];
+  const endMember = END_MEMBER.exec(id);
+  if (endMember) {
+    const [, solution, cation, cationMol, siliconMol] = endMember;
+    const ratio = Number(cationMol) / Number(siliconMol);
+    if (Number.isFinite(ratio) && Number(siliconMol) > 0)
+      return `${solution === "csh" ? "C-S-H" : "M-S-H"} end-member (${cation === "ca" ? "Ca" : "Mg"}/Si ${Number(ratio.toFixed(2))})`;
+  }
+  return id;
+}
+
+/** The chart with its series named by `phaseLabel` (legend, data table and CSV alike); other labels are kept. */
+export function withPhaseLabels(chart: ChartData): ChartData {
+  return { ...chart, series: chart.series.map((s) => ({ ...s, label: phaseLabel(s.label) })) };
+}

@@ -310,6 +310,33 @@ export function pasteAtTemperature(base: ScenarioBase, addedElementsMol: Record<
  * this index is continuous in temperature, so Brent's method converges on it. Each evaluation is warm-started
  * from the nearest previous one.
  */
+/**
+ * Where a phase stops being stable along a temperature sweep (points in increasing temperature, `dose` =
+ * °C): absent throughout, stable throughout, or the first loss bracketed by the sweep and located by
+ * `stabilityLimitTemperatureC` on the assemblage without that phase (a bracket is kept when root finding fails).
+ */
+export function phaseStabilityLimit(
+  points: readonly { dose: number; paste: HydratedPaste }[],
+  phaseId: string,
+  pasteWithout: PasteAt,
+  toleranceC: number,
+  maxIterations: number,
+): StabilityLimit {
+  const isPresent = (paste: HydratedPaste) => phaseMoles(paste, phaseId) > PRESENT_ABOVE_MOL;
+  const firstC = points[0].dose;
+  const lastC = points[points.length - 1].dose;
+  const firstPresent = points.findIndex((p) => isPresent(p.paste));
+  if (firstPresent < 0) return { kind: "absent-throughout", fromC: firstC, toC: lastC };
+  const lost = points.findIndex((p, i) => i > firstPresent && !isPresent(p.paste));
+  if (lost < 0) return { kind: "stable-throughout", upToC: lastC };
+  const present = { temperatureC: points[lost - 1].dose, paste: points[lost - 1].paste };
+  const absent = { temperatureC: points[lost].dose, paste: points[lost].paste };
+  const root = stabilityLimitTemperatureC(pasteWithout, phaseId, present, absent, toleranceC, maxIterations);
+  return root.ok
+    ? { kind: "found", temperatureC: root.value.temperatureC, iterations: root.value.iterations, bracketC: [present.temperatureC, absent.temperatureC] }
+    : { kind: "bracketed", bracketC: [present.temperatureC, absent.temperatureC], failure: `${root.error.code} at ${root.error.temperatureC} °C` };
+}
+
 export function stabilityLimitTemperatureC(
   pasteWithout: PasteAt,
   phaseId: string,
@@ -455,22 +482,7 @@ export function temperatureHistory(
   const withoutEttringite = pasteAtTemperature(withData, {}, ["ettringite"]);
   const tolerance = options.toleranceC ?? DEFAULT_TOLERANCE_C;
   const maxIterations = options.maxIterations ?? DEFAULT_MAX_ITERATIONS;
-  const isPresent = (paste: HydratedPaste) => phaseMoles(paste, "ettringite") > PRESENT_ABOVE_MOL;
-  let stabilityLimit: StabilityLimit;
-  const firstPresent = points.findIndex((p) => isPresent(p.paste));
-  if (firstPresent < 0) stabilityLimit = { kind: "absent-throughout", fromC: temperatures[0], toC: temperatures[temperatures.length - 1] };
-  else {
-    const lost = points.findIndex((p, i) => i > firstPresent && !isPresent(p.paste));
-    if (lost < 0) stabilityLimit = { kind: "stable-throughout", upToC: temperatures[temperatures.length - 1] };
-    else {
-      const present = { temperatureC: points[lost - 1].dose, paste: points[lost - 1].paste };
-      const absent = { temperatureC: points[lost].dose, paste: points[lost].paste };
-      const root = stabilityLimitTemperatureC(withoutEttringite, "ettringite", present, absent, tolerance, maxIterations);
-      stabilityLimit = root.ok
-        ? { kind: "found", temperatureC: root.value.temperatureC, iterations: root.value.iterations, bracketC: [present.temperatureC, absent.temperatureC] }
-        : { kind: "bracketed", bracketC: [present.temperatureC, absent.temperatureC], failure: `${root.error.code} at ${root.error.temperatureC} °C` };
-    }
-  }
+  const stabilityLimit = phaseStabilityLimit(points, "ettringite", withoutEttringite, tolerance, maxIterations);
 
   const at = (t: number) => points.find((p) => p.dose === t)!.paste;
   const stateAt = (t: number): { ok: true; value: TemperatureState } | { ok: false; error: TemperatureHistoryError } => {

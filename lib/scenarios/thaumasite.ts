@@ -3,7 +3,7 @@ import type { HydratedPaste } from "../cement/hydrate-paste";
 import { loadDataset } from "../data/load-dataset";
 import { serviceTemperatureRangeC, type ExposureInput } from "../schema/exposure-input";
 import { linearDoses, phaseMoles, sweepPoint, type ScenarioBase, type ScenarioSweep, type SweepFailure, type SweepPoint } from "./sweep";
-import { byDistance, formationGibbsKJPerMol, pasteAtTemperature, recent, stabilityLimitTemperatureC, supersaturatedSolid, type EquilibriumChecks, type StabilityLimit } from "./temperature-history";
+import { byDistance, formationGibbsKJPerMol, pasteAtTemperature, recent, phaseStabilityLimit, supersaturatedSolid, type EquilibriumChecks, type StabilityLimit } from "./temperature-history";
 
 /**
  * Thaumasite, Ca6Si2(SO4)2(CO3)2(OH)12·24H2O: the C-S-H of the paste reacts with sulfate and carbonate and loses
@@ -42,7 +42,6 @@ const DEFAULT_CARBONATE_AGGREGATE_CALCITE_G_PER_100G = 10;
 const ETTRINGITE_SULFATE_PER_ALUMINIUM = 1.5;
 const DEFAULT_TOLERANCE_C = 0.05;
 const DEFAULT_MAX_ITERATIONS = 40;
-const PRESENT_ABOVE_MOL = 1e-12;
 /**
  * Sulfate concentration assumed when the exposure gives only soil sulfate, mg/L: the EN 206 XA2/XA3 boundary
  * (3000 mg/L, EN 206 Table 2), the same severe case as the sulfate-ingress scenario.
@@ -240,22 +239,7 @@ export function thaumasite(
   }
 
   const withoutThaumasite = pasteAtTemperature(withData, added, ["thaumasite"]);
-  const isPresent = (paste: HydratedPaste) => phaseMoles(paste, "thaumasite") > PRESENT_ABOVE_MOL;
-  let stabilityLimit: StabilityLimit;
-  const firstPresent = points.findIndex((p) => isPresent(p.paste));
-  if (firstPresent < 0) stabilityLimit = { kind: "absent-throughout", fromC: temperatures[0], toC: temperatures[temperatures.length - 1] };
-  else {
-    const lost = points.findIndex((p, i) => i > firstPresent && !isPresent(p.paste));
-    if (lost < 0) stabilityLimit = { kind: "stable-throughout", upToC: temperatures[temperatures.length - 1] };
-    else {
-      const present = { temperatureC: points[lost - 1].dose, paste: points[lost - 1].paste };
-      const absent = { temperatureC: points[lost].dose, paste: points[lost].paste };
-      const root = stabilityLimitTemperatureC(withoutThaumasite, "thaumasite", present, absent, options.toleranceC ?? DEFAULT_TOLERANCE_C, options.maxIterations ?? DEFAULT_MAX_ITERATIONS);
-      stabilityLimit = root.ok
-        ? { kind: "found", temperatureC: root.value.temperatureC, iterations: root.value.iterations, bracketC: [present.temperatureC, absent.temperatureC] }
-        : { kind: "bracketed", bracketC: [present.temperatureC, absent.temperatureC], failure: `${root.error.code} at ${root.error.temperatureC} °C` };
-    }
-  }
+  const stabilityLimit = phaseStabilityLimit(points, "thaumasite", withoutThaumasite, options.toleranceC ?? DEFAULT_TOLERANCE_C, options.maxIterations ?? DEFAULT_MAX_ITERATIONS);
 
   const service = points.find((p) => p.dose === serviceC)!.paste;
   const serviceWithout = withoutThaumasite(serviceC, byDistance(points, serviceC));

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { formatIssues, type FieldIssue } from "./format-issues";
 import cementPresets from "../data/binders/cement-presets.json";
 import scmPresets from "../data/binders/scm-presets.json";
 
@@ -204,9 +205,5 @@ export type OxideAnalysisMassPercent = {
 export type PhaseAnalysisMassPercent = z.infer<typeof phaseAnalysis>;
 
 /** One issue of a failed parse, with the dotted path of the field (`mix.waterBinderRatio`, `supplementaryMaterials.0.type`). */
-export type InputIssue = { path: string; message: string };
-
-/** Flattens a zod error into path/message pairs for the form, the API and the CLI. */
-export function formatIssues(error: z.ZodError): InputIssue[] {
-  return error.issues.map((issue) => ({ path: issue.path.map(String).join("."), message: issue.message }));
-}
+export type InputIssue = FieldIssue;
+export { formatIssues };

@@ -106,7 +106,8 @@ class Accumulator {
   }
 }
 
-function clinkerDegree(id: ClinkerPhaseId, degrees: ReactionDegrees): number {
+/** Degree of reaction of a clinker-derived solid: its PK phase, ferrite-c2f with ferrite, periclase with alite, the rest whole. */
+export function clinkerDegree(id: ClinkerPhaseId, degrees: ReactionDegrees): number {
   switch (id) {
     case "alite":
     case "belite":

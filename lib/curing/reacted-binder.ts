@@ -1,5 +1,6 @@
 import { atomicWeightGPerMol } from "../chem/atomic-weights";
 import { clinkerPhase, type ClinkerPhaseId, type ScmType } from "../cement/clinker-phases";
+import { clinkerDegree } from "../cement/bulk-composition";
 import { partitionCementOxides, type ClinkerPartitionError } from "../cement/clinker-partition";
 import { oxideIds, oxideMolarMassGPerMol, type OxideId, type OxideMassesG } from "../cement/oxides";
 import type { ReactionDegrees } from "../cement/reaction-degrees";
@@ -32,23 +33,6 @@ const phaseInputIds: Record<keyof PhaseAnalysisMassPercent, ClinkerPhaseId> = {
   alite: "alite", belite: "belite", aluminate: "aluminate", ferrite: "ferrite", periclase: "periclase", freeLime: "free-lime",
   calcite: "calcite", gypsum: "gypsum", bassanite: "bassanite", anhydrite: "anhydrite", arcanite: "arcanite", aphthitalite: "aphthitalite",
 };
-
-/** Degree of a clinker-derived solid, as in bulk-composition.ts (ferrite-c2f with ferrite, periclase with alite, the rest whole). */
-function clinkerDegree(id: ClinkerPhaseId, degrees: ReactionDegrees): number {
-  switch (id) {
-    case "alite":
-    case "belite":
-    case "aluminate":
-    case "ferrite":
-      return degrees.clinker[id];
-    case "ferrite-c2f":
-      return degrees.clinker.ferrite;
-    case "periclase":
-      return degrees.clinker.alite;
-    default:
-      return 1;
-  }
-}
 
 /** Reactant id of a clinker-derived solid in the anhydrous-enthalpy data file (the same ids). */
 function reactantIdOf(id: ClinkerPhaseId): string {

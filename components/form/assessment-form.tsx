@@ -98,7 +98,6 @@ export function AssessmentForm({ onSubmit, initialValues, busy = false, submitLa
         </div>
         {demoLoaded ? (
           <p className="demo-banner" role="status">
-            <span aria-hidden="true">ⓘ </span>
             {DEMO_LABEL}. Replace every value with your own before relying on the output.
           </p>
         ) : null}

@@ -64,7 +64,7 @@ export function CautionList({ cautions }: { cautions: readonly string[] }) {
   return (
     <aside className="cautions" aria-labelledby="cautions-title">
       <h3 id="cautions-title">
-        <span aria-hidden="true">ⓘ </span>Cautions
+        Cautions
       </h3>
       <ul>
         {cautions.map((c) => (

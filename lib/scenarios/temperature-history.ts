@@ -29,11 +29,11 @@ import { linearDoses, phaseMoles, sweepPoint, type ScenarioBase, type ScenarioSw
 const DEFAULT_SWEEP_FROM_C = 5;
 const DEFAULT_SWEEP_TO_C = 95;
 /** The data set covers 0–100 °C (issue 3 scope); temperatures outside are refused. */
-const DATA_SET_MIN_C = 0;
-const DATA_SET_MAX_C = 100;
+export const DATA_SET_MIN_C = 0;
+export const DATA_SET_MAX_C = 100;
 /** Root-finding tolerance on temperature, °C, and iteration cap (a cap so nothing hangs). */
-const DEFAULT_TOLERANCE_C = 0.05;
-const DEFAULT_MAX_ITERATIONS = 40;
+export const DEFAULT_TOLERANCE_C = 0.05;
+export const DEFAULT_MAX_ITERATIONS = 40;
 /** Below this amount, mol per 100 g binder, a phase is counted absent (numerical dust of the solver). */
 const PRESENT_ABOVE_MOL = 1e-12;
 /**

@@ -3,7 +3,7 @@ import type { HydratedPaste } from "../cement/hydrate-paste";
 import { loadDataset } from "../data/load-dataset";
 import { serviceTemperatureRangeC, type ExposureInput } from "../schema/exposure-input";
 import { linearDoses, phaseMoles, sweepPoint, type ScenarioBase, type ScenarioSweep, type SweepFailure, type SweepPoint } from "./sweep";
-import { byDistance, formationGibbsKJPerMol, pasteAtTemperature, recent, phaseStabilityLimit, supersaturatedSolid, type EquilibriumChecks, type StabilityLimit } from "./temperature-history";
+import { byDistance, formationGibbsKJPerMol, pasteAtTemperature, recent, phaseStabilityLimit, supersaturatedSolid, DATA_SET_MAX_C, DATA_SET_MIN_C, DEFAULT_MAX_ITERATIONS, DEFAULT_TOLERANCE_C, type EquilibriumChecks, type StabilityLimit } from "./temperature-history";
 
 /**
  * Thaumasite, Ca6Si2(SO4)2(CO3)2(OH)12·24H2O: the C-S-H of the paste reacts with sulfate and carbonate and loses
@@ -31,17 +31,12 @@ import { byDistance, formationGibbsKJPerMol, pasteAtTemperature, recent, phaseSt
 /** Default sweep, °C: 0–30 °C spans the cold to warm service temperatures where thaumasite is discussed (Schmidt et al. 2008). */
 const DEFAULT_SWEEP_FROM_C = 0;
 const DEFAULT_SWEEP_TO_C = 30;
-/** The data set covers 0–100 °C; a colder service minimum is evaluated at 0 °C. */
-const DATA_SET_MIN_C = 0;
-const DATA_SET_MAX_C = 100;
 /** Sulfate beyond the ettringite capacity, g SO3 per 100 g binder (model choice: a sulfate-saturated zone; see above). */
 const DEFAULT_SULFATE_EXCESS_SO3_MASS_PERCENT = 2;
 /** Calcite offered by carbonate aggregate, g per 100 g binder (typical: an excess over what thaumasite can use). */
 const DEFAULT_CARBONATE_AGGREGATE_CALCITE_G_PER_100G = 10;
 /** Ettringite, Ca6Al2(SO4)3(OH)12·26H2O: 3 SO4 per 2 Al (formula). */
 const ETTRINGITE_SULFATE_PER_ALUMINIUM = 1.5;
-const DEFAULT_TOLERANCE_C = 0.05;
-const DEFAULT_MAX_ITERATIONS = 40;
 /**
  * Sulfate concentration assumed when the exposure gives only soil sulfate, mg/L: the EN 206 XA2/XA3 boundary
  * (3000 mg/L, EN 206 Table 2), the same severe case as the sulfate-ingress scenario.

@@ -10,6 +10,8 @@ import { OxideFields } from "./oxide-fields";
 import { AmbientSeriesFields } from "./ambient-series-fields";
 import { ServiceTemperatureFields, serviceTemperatureModeOf, type ServiceTemperatureMode } from "./service-temperature-fields";
 import { StrengthTargetFields } from "./strength-target-fields";
+import { HeatCurveFields } from "./heat-curve-fields";
+import { LimitOverrideFields } from "./limit-override-fields";
 import { ErrorSummary } from "./error-summary";
 import { flattenFormErrors, withoutUnionMessageBesideBounds } from "./form-errors";
 import { cementPhasesForThermalModel, prepareAssessInput } from "./prepare-input";
@@ -55,6 +57,7 @@ export function AssessmentForm({ onSubmit, initialValues, busy = false, submitLa
   const [thermal, setThermal] = useState(Boolean(initialValues?.curing?.thermal));
   const [steam, setSteam] = useState(Boolean(initialValues?.curing?.thermal?.steamCuring));
   const [evaporation, setEvaporation] = useState(Boolean(initialValues?.curing?.thermal?.evaporation));
+  const [heatCurve, setHeatCurve] = useState(Boolean(initialValues?.curing?.thermal?.heatCurve));
   const [monteCarlo, setMonteCarlo] = useState(Boolean(initialValues?.options?.monteCarlo));
   const [serviceTemperatureMode, setServiceTemperatureMode] = useState<ServiceTemperatureMode>(serviceTemperatureModeOf(initialValues?.exposure?.serviceTemperatureC));
   const [demoLoaded, setDemoLoaded] = useState(false);
@@ -81,6 +84,7 @@ export function AssessmentForm({ onSubmit, initialValues, busy = false, submitLa
     setThermal(Boolean(culvertDemo.curing?.thermal));
     setSteam(false);
     setEvaporation(false);
+    setHeatCurve(Boolean(culvertDemo.curing?.thermal?.heatCurve));
     setMonteCarlo(false);
     setServiceTemperatureMode(serviceTemperatureModeOf(culvertDemo.exposure.serviceTemperatureC));
     setPendingReset(structuredClone(culvertDemo));
@@ -125,7 +129,7 @@ export function AssessmentForm({ onSubmit, initialValues, busy = false, submitLa
           {!thermal ? (
             <NumberField name="curing.maxTemperatureC" label="Maximum concrete temperature" unit="°C" hint="Peak temperature during curing; checked against the 70 °C delayed-ettringite limit (Taylor, Famy & Scrivener 2001). Leave empty if unknown." />
           ) : (
-            <ThermalSection steam={steam} setSteam={setSteam} evaporation={evaporation} setEvaporation={setEvaporation} />
+            <ThermalSection steam={steam} setSteam={setSteam} evaporation={evaporation} setEvaporation={setEvaporation} heatCurve={heatCurve} setHeatCurve={setHeatCurve} />
           )}
         </fieldset>
 
@@ -359,7 +363,16 @@ function ExposureSection({ serviceTemperatureMode, setServiceTemperatureMode }: 
   );
 }
 
-function ThermalSection({ steam, setSteam, evaporation, setEvaporation }: { steam: boolean; setSteam: (v: boolean) => void; evaporation: boolean; setEvaporation: (v: boolean) => void }) {
+type ThermalSectionProps = {
+  steam: boolean;
+  setSteam: (v: boolean) => void;
+  evaporation: boolean;
+  setEvaporation: (v: boolean) => void;
+  heatCurve: boolean;
+  setHeatCurve: (v: boolean) => void;
+};
+
+function ThermalSection({ steam, setSteam, evaporation, setEvaporation, heatCurve, setHeatCurve }: ThermalSectionProps) {
   const { control } = useFormContextTyped();
   const ambientKind = useWatch({ control, name: "curing.thermal.ambient.kind" as never }) as string | undefined;
   const geometry = useWatch({ control, name: "curing.thermal.element.geometry" as never }) as string | undefined;
@@ -379,6 +392,17 @@ function ThermalSection({ steam, setSteam, evaporation, setEvaporation }: { stea
         <SelectField name="curing.thermal.concrete.cementClass" label="Cement strength class" choices={[{ value: "R", label: "R (rapid)" }, { value: "N", label: "N (normal)" }, { value: "S", label: "S (slow)" }]} emptyLabel="default N (fib MC2010)" />
         <SelectField name="curing.thermal.element.geometry" label="Faces" choices={[{ value: "symmetric", label: "both faces alike" }, { value: "two-faces", label: "two different faces" }]} />
       </div>
+      <fieldset className="subsection">
+        <legend>Heat of hydration</legend>
+        <div className="field checkbox">
+          <input id="f-heat-curve" type="checkbox" checked={heatCurve} onChange={(e) => setHeatCurve(e.target.checked)} aria-describedby="f-heat-curve-hint" />
+          <label htmlFor="f-heat-curve">Use a measured heat curve (calorimetry) instead of the heat model</label>
+          <p className="hint" id="f-heat-curve-hint">
+            Unticked, the heat comes from the cement phases and supplementary materials (Schindler &amp; Folliard 2005 hydration model).
+          </p>
+        </div>
+        {heatCurve ? <HeatCurveFields /> : null}
+      </fieldset>
       <fieldset className="subsection">
         <legend>Ambient profile</legend>
         <ModeRadios name="curing.thermal.ambient.kind" legend="Air temperature" choices={[{ value: "constant", label: "constant" }, { value: "daily-sine", label: "daily cycle" }, { value: "series", label: "entered series (hour, °C)" }]} />
@@ -436,6 +460,7 @@ function ThermalSection({ steam, setSteam, evaporation, setEvaporation }: { stea
         </div>
       </fieldset>
       <StrengthTargetFields />
+      <LimitOverrideFields />
       <div className="field checkbox">
         <input id="f-evaporation" type="checkbox" checked={evaporation} onChange={(e) => setEvaporation(e.target.checked)} />
         <label htmlFor="f-evaporation">Check plastic-shrinkage evaporation (weather at placement)</label>

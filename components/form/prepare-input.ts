@@ -70,6 +70,7 @@ export function prepareAssessInput(values: Loose): Loose {
   if (thermal) {
     // Rows left wholly empty are dropped; a half-filled row stays, so the schema names the missing value.
     if (Array.isArray(thermal.ambient?.points)) thermal.ambient.points = (thermal.ambient.points as Loose[]).filter((p) => p && !(p.timeH === undefined && p.temperatureC === undefined));
+    if (Array.isArray(thermal.heatCurve?.points)) thermal.heatCurve.points = (thermal.heatCurve.points as Loose[]).filter((p) => p && !(p.equivalentAgeH === undefined && p.cumulativeHeatJPerG === undefined));
     if (Array.isArray(thermal.strengthTargets)) thermal.strengthTargets = (thermal.strengthTargets as Loose[]).filter((t) => t && !(t.label === undefined && t.strengthMPa === undefined));
     thermal.element = { ...(thermal.element ?? {}), thicknessM: out.project?.element?.thicknessM };
     thermal.concrete = {

@@ -2,13 +2,14 @@ import { molarMassGPerMol } from "../chem/atomic-weights";
 import { loadDataset, type Dataset } from "../data/load-dataset";
 import { suppressedPhases } from "../data/kinetic-constraints";
 import alkaliUptake from "../data/binders/alkali-uptake.json";
+import gelPores from "../data/binders/gel-pores.json";
 import { equilibrateSystem } from "../equilibrium/equilibrate";
 import type { EquilibriumFailure } from "../equilibrium/failure";
 import type { EquilibriumResult, SerializedState } from "../equilibrium/result";
 import { potassiumHydroxideDominatedParameters } from "../thermo/truesdell-jones";
 import { waterDensityKgPerM3 } from "../thermo/water-density";
 import type { BulkComposition, BulkCompositionWarning } from "./bulk-composition";
-import { capillaryPorosityFraction, chemicalShrinkageCm3, initialPasteVolumeCm3, mixingWaterDensityGPerCm3, per100gToPerM3, volumeBalance, type VolumeBalance } from "./volumes";
+import { chemicalShrinkageCm3, classifyPoreSpace, initialPasteVolumeCm3, mixingWaterDensityGPerCm3, per100gToPerM3, volumeBalance, waterFilledAndEmptyFraction, type VolumeBalance } from "./volumes";
 
 /** Molar mass of water, g/mol (IUPAC 2021 atomic weights: 2 × 1.008 + 15.999). */
 const WATER_G_PER_MOL = 18.015;
@@ -35,12 +36,26 @@ export type HydratedPaste = {
   phases: PhaseAmount[];
   /** Phase id → cm³ per 100 g binder, the unreacted binder and `pore-solution` included. */
   volumes: Record<string, number>;
+  /** Paste volumes in cm³ per 100 g binder and porosities as fractions of the initial paste volume (`volumes.ts`). */
   porosity: {
     initialPasteVolumeCm3: number;
+    /** All liquid, gel-pore water of the C-S-H included (one solution chemically). */
     poreSolutionVolumeCm3: number;
+    /** Empty space left by chemical shrinkage (sealed curing; water-filled when water-cured). */
     chemicalShrinkageCm3: number;
-    /** (pore solution + chemical shrinkage) / initial paste volume. */
+    /** Gel pores of the C-S-H at Powers' characteristic gel porosity (`gel-pores.json`). */
+    gelPoreVolumeCm3: number;
+    /** Pore solution + shrinkage space − gel pores: Powers' capillary pores. */
+    capillaryPoreVolumeCm3: number;
+    /**
+     * (pore solution + chemical shrinkage) / initial paste volume: every pore the solids leave, water-filled or
+     * empty, gel pores of the C-S-H included (not Powers' capillary porosity).
+     */
+    waterFilledAndEmptyFraction: number;
+    /** Capillary porosity as Powers & Brownyard (1947) define it: capillary pore volume / initial paste volume, gel pores excluded. */
     capillaryFraction: number;
+    /** The characteristic gel porosity used for the split (gel pores per volume of gel), fraction. */
+    characteristicGelPorosity: number;
     balance: VolumeBalance;
   };
   boundWaterG: number;
@@ -97,7 +112,8 @@ function boundWaterMol(result: EquilibriumResult, elementsOf: (id: string) => Re
  * partly hydrated paste, with unreacted clinker and SCM as the kinetic constraint (Lothenbach &
  * Winnefeld 2006, Cem. Concr. Res. 36, 209; Lothenbach et al. 2008, Cem. Concr. Res. 38, 1).
  * Pore-solution activities use the KOH-dominated b-dot set (Helgeson et al. 1981).
- * Volumes follow `volumes.ts` (Powers & Brownyard definitions).
+ * Volumes follow `volumes.ts` (Powers & Brownyard definitions); the pore space is reported both whole
+ * (`waterFilledAndEmptyFraction`) and as Powers' capillary porosity, without the gel pores of the C-S-H.
  */
 export function hydratePaste(
   composition: BulkComposition,
@@ -167,6 +183,9 @@ export function hydratePaste(
   for (const p of phases) volumes[p.id] = (volumes[p.id] ?? 0) + p.volumeCm3;
   const solidVolumes = { ...volumes };
   volumes["pore-solution"] = poreSolutionVolumeCm3;
+  const gelPoreCarrierVolumeCm3 = phases.filter((p) => p.origin === "hydrate" && gelPores.carrierPhaseIds.value.includes(p.id)).reduce((sum, p) => sum + p.volumeCm3, 0);
+  const gelPorosity = gelPores.characteristicGelPorosity.value;
+  const poreClasses = classifyPoreSpace(poreSolutionVolumeCm3, shrinkage, gelPoreCarrierVolumeCm3, gelPorosity, initialVolume);
 
   // Bound alkali hydroxide XOH carries ½ H2O per X.
   const boundWaterG = (boundWaterMol(assemblage, elementsOf) + Object.values(boundMol).reduce((a, b) => a + b / 2, 0)) * WATER_G_PER_MOL;
@@ -197,7 +216,11 @@ export function hydratePaste(
         initialPasteVolumeCm3: initialVolume,
         poreSolutionVolumeCm3,
         chemicalShrinkageCm3: shrinkage,
-        capillaryFraction: capillaryPorosityFraction(poreSolutionVolumeCm3, shrinkage, initialVolume),
+        gelPoreVolumeCm3: poreClasses.gelPoreVolumeCm3,
+        capillaryPoreVolumeCm3: poreClasses.capillaryPoreVolumeCm3,
+        waterFilledAndEmptyFraction: waterFilledAndEmptyFraction(poreSolutionVolumeCm3, shrinkage, initialVolume),
+        capillaryFraction: poreClasses.capillaryPorosityFraction,
+        characteristicGelPorosity: gelPorosity,
         balance: volumeBalance(solidVolumes, poreSolutionVolumeCm3, shrinkage, initialVolume),
       },
       boundWaterG,

@@ -10,7 +10,10 @@ export type TimelineEntry = {
   /** Grams and cm³ per 100 g binder of every solid, hydrates and unreacted binder. */
   phases: PhaseAmount[];
   poreSolutionVolumeCm3: number;
+  /** Powers' capillary porosity, gel pores of the C-S-H excluded, fraction of the paste (`HydratedPaste.porosity.capillaryFraction`). */
   capillaryPorosityFraction: number;
+  /** Pore solution + shrinkage space, gel pores included, fraction of the paste (`HydratedPaste.porosity.waterFilledAndEmptyFraction`). */
+  waterFilledAndEmptyPorosityFraction: number;
   pH: number | null;
 };
 
@@ -59,6 +62,7 @@ export function hydrationTimeline(
       phases: paste.value.phases,
       poreSolutionVolumeCm3: paste.value.porosity.poreSolutionVolumeCm3,
       capillaryPorosityFraction: paste.value.porosity.capillaryFraction,
+      waterFilledAndEmptyPorosityFraction: paste.value.porosity.waterFilledAndEmptyFraction,
       pH: paste.value.poreSolution?.pH ?? null,
     });
   }

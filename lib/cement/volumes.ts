@@ -8,8 +8,13 @@ import { waterDensityKgPerM3 } from "../thermo/water-density";
  * Definitions (Powers & Brownyard 1947; Lothenbach et al. 2008, Cem. Concr. Res. 38, 1):
  *   initial paste          V0  = V(binder) + V(mixing water)
  *   chemical shrinkage     Vcs = V(reacted binder) + V(mixing water) − V(hydrates) − V(pore solution)
- *   capillary porosity     φ   = (V(pore solution) + Vcs) / V0      (shrinkage space empty when sealed, refilled when water-cured)
+ *   water-filled and empty φ_we = (V(pore solution) + Vcs) / V0   (all space the solids leave; shrinkage space empty
+ *                                                                   when sealed, refilled when water-cured)
+ *   gel pores              V_gp = min(φ_g / (1 − φ_g) · V(C-S-H), V(pore solution) + Vcs)
+ *   capillary porosity     φ_cap = (V(pore solution) + Vcs − V_gp) / V0   (Powers' definition: gel pores excluded)
  *   volume balance         V(solids) + V(pore solution) + Vcs = V0, solids = hydrates + unreacted binder.
+ * The equilibrium C-S-H holds only its interlayer water, so the water of its gel pores is in the pore solution;
+ * φ_g is Powers' characteristic gel porosity (`lib/data/binders/gel-pores.json`).
  */
 
 /** Density of the mixing water, g/cm³, at the mixing temperature (Kell 1975 via lib/thermo). */
@@ -33,9 +38,50 @@ export function chemicalShrinkageCm3(input: ShrinkageInput): number {
   return input.reactedBinderVolumeCm3 + input.mixingWaterVolumeCm3 - input.hydrateVolumeCm3 - input.poreSolutionVolumeCm3;
 }
 
-/** φ = (V(pore solution) + Vcs) / V0, a fraction of the paste volume. */
-export function capillaryPorosityFraction(poreSolutionVolumeCm3: number, chemicalShrinkageVolumeCm3: number, initialPasteVolume: number): number {
+/**
+ * φ_we = (V(pore solution) + Vcs) / V0, a fraction of the paste volume: every pore the solids leave, water-filled
+ * or empty, gel pores of the C-S-H included. Equal to Powers' capillary porosity only when the hydrate volumes
+ * already contain their gel water (as in Powers' own gel).
+ */
+export function waterFilledAndEmptyFraction(poreSolutionVolumeCm3: number, chemicalShrinkageVolumeCm3: number, initialPasteVolume: number): number {
   return (poreSolutionVolumeCm3 + chemicalShrinkageVolumeCm3) / initialPasteVolume;
+}
+
+export type PoreSpaceClasses = {
+  /** V_gp: gel pores of the gel-pore carriers, cm³ per 100 g binder. */
+  gelPoreVolumeCm3: number;
+  /** V(pore solution) + Vcs − V_gp: capillary pores in Powers' sense, cm³ per 100 g binder. */
+  capillaryPoreVolumeCm3: number;
+  /** V_gp / V0. */
+  gelPorosityFraction: number;
+  /** φ_cap = (V(pore solution) + Vcs − V_gp) / V0 (Powers & Brownyard 1947). */
+  capillaryPorosityFraction: number;
+};
+
+/**
+ * Splits the space the solids leave (pore solution + shrinkage space) into gel and capillary pores as Powers &
+ * Brownyard (1947) do. The gel pores belong to the gel-pore-carrying solid (the C-S-H) at the characteristic gel
+ * porosity φ_g (pores per volume of gel): V_gp = φ_g / (1 − φ_g) · V(carrier solid), limited to the pore space
+ * present (they are the smallest pores, the last to empty). Gel + capillary = pore solution + shrinkage exactly;
+ * the split classifies volume only and leaves the pore solution's chemistry and every balance unchanged.
+ */
+export function classifyPoreSpace(
+  poreSolutionVolumeCm3: number,
+  chemicalShrinkageVolumeCm3: number,
+  gelPoreCarrierVolumeCm3: number,
+  characteristicGelPorosity: number,
+  initialPasteVolume: number,
+): PoreSpaceClasses {
+  const poreSpaceCm3 = poreSolutionVolumeCm3 + chemicalShrinkageVolumeCm3;
+  const gelCapacityCm3 = (characteristicGelPorosity / (1 - characteristicGelPorosity)) * gelPoreCarrierVolumeCm3;
+  const gelPoreVolumeCm3 = Math.max(0, Math.min(gelCapacityCm3, poreSpaceCm3));
+  const capillaryPoreVolumeCm3 = poreSpaceCm3 - gelPoreVolumeCm3;
+  return {
+    gelPoreVolumeCm3,
+    capillaryPoreVolumeCm3,
+    gelPorosityFraction: gelPoreVolumeCm3 / initialPasteVolume,
+    capillaryPorosityFraction: capillaryPoreVolumeCm3 / initialPasteVolume,
+  };
 }
 
 export type VolumeBalance = {

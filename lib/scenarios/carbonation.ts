@@ -53,7 +53,8 @@ const caToSiOf = (paste: HydratedPaste): number | null => {
  * portlandite, C-S-H Ca/Si, calcite and the sulfate and chloride released from AFm/AFt. The CO2-binding
  * capacity is the uptake at full carbonation; the depassivation point is where the pH falls below the
  * threshold (about 9). Both feed the Papadakis, Vayenas & Fardis (1991, ACI Mater. J. 88, 363) diffusion
- * model for depth against time, with the engine's capillary porosity as the paste porosity.
+ * model for depth against time, with the engine's water-filled and empty pore fraction (pore solution + shrinkage
+ * space, gel pores of the C-S-H included) as the paste porosity.
  */
 export function carbonationScenario(
   base: ScenarioBase,
@@ -91,7 +92,7 @@ export function carbonationScenario(
   const last = swept.value[swept.value.length - 1].paste;
   const capacityPerM3 = perM3(full.dose);
   const depth = estimateCarbonation({
-    pastePorosity: start.value[0].paste.porosity.capillaryFraction,
+    pastePorosity: start.value[0].paste.porosity.waterFilledAndEmptyFraction,
     relativeHumidityPercent: exposure.relativeHumidityPercent ?? DEFAULT_RELATIVE_HUMIDITY_PERCENT,
     co2Percent: exposure.co2Percent,
     bindingCapacityMolPerM3: capacityPerM3,

@@ -1,14 +1,16 @@
 import { describe, it, expect } from "vitest";
+import fc from "fast-check";
 import {
   initialPasteVolumeCm3,
   chemicalShrinkageCm3,
-  capillaryPorosityFraction,
+  waterFilledAndEmptyFraction,
+  classifyPoreSpace,
   volumeBalance,
   per100gToPerM3,
   concreteVolumeCheck,
   mixingWaterDensityGPerCm3,
 } from "../../lib/cement/volumes";
-import { powersPasteFractions, powersCapillaryPorosity } from "../../lib/cement/powers-model";
+import { powersPasteFractions, powersCapillaryPorosity, powersGelPorosity } from "../../lib/cement/powers-model";
 import { bulkComposition } from "../../lib/cement/bulk-composition";
 import { resolveBinder } from "../../lib/cement/resolve-binder";
 import { reactionDegreesForInput } from "../../lib/cement/reaction-degrees";
@@ -29,9 +31,37 @@ describe("paste and concrete volume bookkeeping", () => {
     expect(shrinkage).toBeCloseTo(5.08, 2);
   });
 
-  it("gives the capillary porosity of Powers' model from pore solution and shrinkage space", () => {
+  it("gives the capillary porosity of Powers' model from pore solution and shrinkage space when the hydrates hold their gel water", () => {
     const shrinkage = f.chemicalShrinkage * initial;
-    expect(capillaryPorosityFraction(poreSolution, shrinkage, initial)).toBeCloseTo(powersCapillaryPorosity(0.5, 0.8), 12);
+    expect(waterFilledAndEmptyFraction(poreSolution, shrinkage, initial)).toBeCloseTo(powersCapillaryPorosity(0.5, 0.8), 12);
+  });
+
+  it("recovers Powers' capillary and gel porosity when the gel water is in the pore solution and the gel pores are attached to the gel solid (Jensen & Hansen 2001 fractions)", () => {
+    // The same Powers paste as an equilibrium calculation sees it: hydrates = gel solid only, the gel water in solution.
+    const shrinkage = f.chemicalShrinkage * initial;
+    const solutionWithGelWater = (f.capillaryWater + f.gelWater) * initial;
+    const classes = classifyPoreSpace(solutionWithGelWater, shrinkage, f.gelSolid * initial, powersGelPorosity(), initial);
+    expect(classes.capillaryPorosityFraction).toBeCloseTo(powersCapillaryPorosity(0.5, 0.8), 12);
+    expect(classes.gelPorosityFraction).toBeCloseTo(f.gelWater, 12);
+    expect(waterFilledAndEmptyFraction(solutionWithGelWater, shrinkage, initial)).toBeCloseTo(powersCapillaryPorosity(0.5, 0.8) + f.gelWater, 12);
+  });
+
+  it("never gives more gel pores than the pore space and always splits it exactly (property test)", () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0, max: 50, noNaN: true }),
+        fc.double({ min: 0, max: 10, noNaN: true }),
+        fc.double({ min: 0, max: 60, noNaN: true }),
+        fc.double({ min: 0, max: 0.6, noNaN: true }),
+        (solution, shrinkage, carrier, gelPorosity) => {
+          const classes = classifyPoreSpace(solution, shrinkage, carrier, gelPorosity, 100);
+          expect(classes.gelPoreVolumeCm3).toBeGreaterThanOrEqual(0);
+          expect(classes.gelPoreVolumeCm3).toBeLessThanOrEqual(solution + shrinkage + 1e-12);
+          expect(classes.capillaryPoreVolumeCm3).toBeGreaterThanOrEqual(-1e-12);
+          expect(classes.gelPoreVolumeCm3 + classes.capillaryPoreVolumeCm3).toBeCloseTo(solution + shrinkage, 10);
+        },
+      ),
+    );
   });
 
   it("closes the volume balance of a consistent paste and flags one that is 1 % off (tolerance 0.5 %)", () => {

@@ -5,6 +5,7 @@ import { apiRequest, type AssessmentSummary } from "../api-client";
 import { SEVERITY_PRESENTATION } from "../results/flag-list";
 import { formatChartCell } from "../results/data-table";
 import type { Severity } from "../../lib/advisory/flag";
+import { readableInputValue } from "../../lib/report/input-value-label";
 
 type Comparison = {
   assessments: AssessmentSummary[];
@@ -59,7 +60,7 @@ export function CompareView({ ids }: { ids: string[] }) {
                       const differs = i > 0 && JSON.stringify(v) !== JSON.stringify(d.values[0]);
                       return (
                         <td key={i} className={differs ? "differs" : undefined}>
-                          {cell(v)}
+                          {cell(readableInputValue(d.path, v))}
                           {differs ? <span className="visually-hidden"> (differs)</span> : null}
                         </td>
                       );

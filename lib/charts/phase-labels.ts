@@ -48,7 +48,20 @@ const PHASE_LABELS: Readonly<Record<string, string>> = {
   "fe-katoite": "Fe-katoite",
   "siliceous-hydrogarnet": "Siliceous hydrogarnet",
   "fe-siliceous-hydrogarnet": "Fe-siliceous hydrogarnet",
+  // Unreacted binder in the hydration timeline (lib/cement/bulk-composition.ts), by the clinker phase's mineral name.
+  alite: "Alite (C₃S, unreacted)",
+  belite: "Belite (C₂S, unreacted)",
+  aluminate: "Aluminate (C₃A, unreacted)",
+  ferrite: "Ferrite (C₄AF, unreacted)",
+  "clinker-minor-oxides": "Minor clinker oxides (unreacted)",
+  // The liquid and the empty pores stacked on the solids.
+  "pore-solution": "Pore solution",
+  "pore solution": "Pore solution",
+  "empty porosity": "Empty porosity",
 };
+
+/** Unreacted supplementary material, `unreacted-<scm type>` (lib/cement/bulk-composition.ts): `unreacted-fly-ash` → "Unreacted fly ash". */
+const UNREACTED_SCM = /^unreacted-([a-z]+(?:-[a-z]+)*)$/;
 
 /** End-members of the C-S-H and M-S-H solid solutions, named by their molar Ca/Si or Mg/Si (`csh-ca1.67-si1`). */
 const END_MEMBER = /^(csh|msh)-(ca|mg)(\d+(?:\.\d+)?)-si(\d+(?:\.\d+)?)$/;
@@ -63,6 +76,8 @@ export function phaseLabel(id: string): string {
     if (Number.isFinite(ratio) && Number(siliconMol) > 0)
       return `${solution === "csh" ? "C-S-H" : "M-S-H"} end-member (${cation === "ca" ? "Ca" : "Mg"}/Si ${Number(ratio.toFixed(2))})`;
   }
+  const unreacted = UNREACTED_SCM.exec(id);
+  if (unreacted) return `Unreacted ${unreacted[1].replace(/-/g, " ")}`;
   return id;
 }
 

@@ -1,16 +1,19 @@
 import type { ChartData } from "../charts/chart-data";
 import { axisCaption } from "../charts/chart-data";
+import { phaseLabel, withPhaseLabels } from "../charts/phase-labels";
 import type { Flag } from "../advisory/flag";
 import { sortFlags } from "../advisory/flag";
 import type { DatasetFileInfo } from "../data/dataset";
 import type { SavedAssessment, Versions } from "../store/assessment-store";
 import { flattenPaths } from "../store/flatten";
 import { cautionsOf, flagsOf, keyFigures, valueAt, type KeyFigure } from "./key-figures";
+import { readableInputValue } from "./input-value-label";
 import type { ValidationDossier } from "../validation/dossier";
 
 /**
  * The content of a report on a saved assessment, independent of the output format: the Markdown and PDF
- * renderers print the same model, so they cannot disagree. Tables are rows of text cells.
+ * renderers print the same model, so they cannot disagree. Tables are rows of text cells. Phases are named
+ * by `phaseLabel` (lib/charts/phase-labels.ts) wherever the report prints one: chart series, assumptions, inputs.
  */
 export type ReportTable = { title: string; columns: string[]; rows: string[][]; note?: string };
 
@@ -71,15 +74,17 @@ export function chartTable(chart: ChartData): ReportTable {
   };
 }
 
+const phaseNameOf = (id: unknown) => (typeof id === "string" ? phaseLabel(id) : formatCell(id));
+
 function assumptionsOf(saved: SavedAssessment): string[] {
   const fromResult = valueAt(saved.result, ["assumptions"]);
   const listed = Array.isArray(fromResult) ? fromResult.filter((a): a is string => typeof a === "string") : [];
   const inputs = saved.inputs;
   const derived: string[] = [];
   const suppressed = valueAt(inputs, ["options", "suppressedPhases"]);
-  if (Array.isArray(suppressed) && suppressed.length > 0) derived.push(`Phases suppressed on top of the default kinetic constraints: ${suppressed.join(", ")}.`);
+  if (Array.isArray(suppressed) && suppressed.length > 0) derived.push(`Phases suppressed on top of the default kinetic constraints: ${suppressed.map(phaseNameOf).join(", ")}.`);
   const allowed = valueAt(inputs, ["options", "allowedPhases"]);
-  if (Array.isArray(allowed) && allowed.length > 0) derived.push(`Default kinetic constraints lifted for: ${allowed.join(", ")}.`);
+  if (Array.isArray(allowed) && allowed.length > 0) derived.push(`Default kinetic constraints lifted for: ${allowed.map(phaseNameOf).join(", ")}.`);
   const samples = valueAt(inputs, ["options", "monteCarlo", "samples"]);
   if (typeof samples === "number") derived.push(`Uncertainty of the data propagated by Monte Carlo sampling with ${samples} samples.`);
   derived.push("Equilibrium of the hydrated binder at the stated age and temperature; transport, cracking and reaction rates are outside the equilibrium calculation.");
@@ -120,7 +125,7 @@ export function buildReportModel(source: ReportSource): ReportModel {
       if (typeof element.coverMm === "number") projectRows.push({ label: "Cover", value: `${formatCell(element.coverMm)} mm` });
     }
   }
-  const inputRows = [...flattenPaths(saved.inputs).entries()].filter(([path]) => !path.startsWith("project.")).map(([path, value]) => [path, formatCell(value)]);
+  const inputRows = [...flattenPaths(saved.inputs).entries()].filter(([path]) => !path.startsWith("project.")).map(([path, value]) => [path, formatCell(readableInputValue(path, value))]);
   const stale: string[] = [];
   if (saved.versions.dataset !== running.dataset) stale.push(`the data set has changed (saved ${saved.versions.dataset}, now ${running.dataset})`);
   if (saved.versions.engine !== running.engine) stale.push(`the engine has changed (saved ${saved.versions.engine}, now ${running.engine})`);
@@ -145,7 +150,8 @@ export function buildReportModel(source: ReportSource): ReportModel {
       files: source.datasetFiles.map((f) => ({ title: f.title, family: f.family, sources: f.provenance.sources, date: f.provenance.date })),
     },
     keyFigures: keyFigures(saved.result),
-    charts: [...source.charts],
+    // Phase series under their readable names, as on the results page (one label function for both).
+    charts: source.charts.map(withPhaseLabels),
     tables: [...(source.tables ?? [])],
     flags: sortFlags(flagsOf(saved.result)),
     cautions: cautions.length > 0 ? cautions : [FALLBACK_CAUTION],

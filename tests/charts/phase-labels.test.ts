@@ -31,6 +31,17 @@ describe("readable phase names", () => {
     expect(phaseLabel("csh-ca1-si2")).toBe("C-S-H end-member (Ca/Si 0.5)");
   });
 
+  it("names the unreacted binder of the hydration timeline and the liquid (mineral names of the clinker phases, common practice)", () => {
+    expect(phaseLabel("alite")).toBe("Alite (C₃S, unreacted)");
+    expect(phaseLabel("ferrite")).toBe("Ferrite (C₄AF, unreacted)");
+    expect(phaseLabel("clinker-minor-oxides")).toBe("Minor clinker oxides (unreacted)");
+    expect(phaseLabel("unreacted-slag")).toBe("Unreacted slag");
+    expect(phaseLabel("unreacted-siliceous-fly-ash")).toBe("Unreacted siliceous fly ash");
+    expect(phaseLabel("pore-solution")).toBe("Pore solution");
+    expect(phaseLabel("pore solution")).toBe("Pore solution");
+    expect(phaseLabel("unreacted-")).toBe("unreacted-");
+  });
+
   it("returns an id it has no name for as it is, including names of Object's prototype", () => {
     expect(phaseLabel("unknown-phase")).toBe("unknown-phase");
     expect(phaseLabel("Pore solution")).toBe("Pore solution");

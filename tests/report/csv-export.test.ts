@@ -15,7 +15,7 @@ describe("seriesCsv", () => {
 
   it("carries the phase-volume and sweep series with their units", () => {
     expect(lines).toContain("phase-volumes,Assemblage,,28 d at 20 °C,C-S-H,cm³/100 g binder,30");
-    expect(lines).toContain("sweep-sulfate,SO4 added,g/100 g binder,3,gypsum,cm³/100 g binder,4.5");
+    expect(lines).toContain("sweep-sulfate,SO4 added,g/100 g binder,3,Gypsum,cm³/100 g binder,4.5");
   });
 
   it("quotes fields that hold a comma", () => {

@@ -23,9 +23,10 @@ describe("buildReportModel", () => {
     expect(stale.currencyStatement).toMatch(/may not compute the same today: the data set has changed \(saved abc123, now zzz\)/);
   });
 
-  it("lists suppressed phases among the assumptions and the inputs without the project block", () => {
+  it("lists suppressed phases by their readable names among the assumptions and the inputs without the project block", () => {
     const model = buildReportModel({ saved: sampleSaved, running, datasetFiles: [], charts: [] });
-    expect(model.assumptions.some((a) => a.includes("thaumasite"))).toBe(true);
+    expect(model.assumptions).toContain("Phases suppressed on top of the default kinetic constraints: Thaumasite.");
+    expect(model.inputs.rows).toContainEqual(["options.suppressedPhases.0", "Thaumasite"]);
     expect(model.inputs.rows).toContainEqual(["mix.waterBinderRatio", "0.45"]);
     expect(model.inputs.rows.some(([path]) => path.startsWith("project."))).toBe(false);
   });

@@ -1,19 +1,25 @@
 import { assessInput } from "../schema/assess-input";
 import { formatIssues } from "../schema/format-issues";
-import { runAssessment, type AssessmentResult } from "./assess";
+import type { AssessmentResult } from "./assess";
 import { createJobRegistry, type JobRegistry, type JobStatus } from "./jobs";
 import { validationError, type ServiceOutcome } from "./outcome";
+import { workerJobRunner, type WorkerModule } from "./worker-job-runner";
+
+/** What an assessment job's worker runs: `runAssessment(raw, { onProgress })` of `lib/service/assess.ts`. */
+export const assessmentWorkerModule: WorkerModule = { modulePath: "lib/service/assess.ts", exportName: "runAssessment" };
 
 /**
  * The process-wide registry of assessment jobs (`/api/v1/assess/jobs`), on `globalThis` so that the
- * routes that start, poll and cancel a job (bundled separately by Next) share it.
+ * routes that start, poll and cancel a job (bundled separately by Next) share it. Each job computes in its
+ * own worker thread (`worker-job-runner.ts`), so the server keeps answering other requests meanwhile, and a
+ * cancelled job's worker is terminated.
  */
 const key = Symbol.for("hydrastate.assessmentJobs");
 type Holder = { [key]?: JobRegistry<AssessmentResult> };
 
 export function assessmentJobs(): JobRegistry<AssessmentResult> {
   const holder = globalThis as Holder;
-  holder[key] ??= createJobRegistry<AssessmentResult>((raw, options) => runAssessment(raw, options));
+  holder[key] ??= createJobRegistry<AssessmentResult>(workerJobRunner<AssessmentResult>(assessmentWorkerModule));
   return holder[key];
 }
 

@@ -2,10 +2,12 @@ import { randomUUID } from "node:crypto";
 import { domainError, type ServiceError, type ServiceOutcome } from "./outcome";
 
 /**
- * In-process jobs for long computations (Monte Carlo assessments): started off the request path, polled
- * for progress, cancellable through an AbortSignal. Kept in memory: a restart forgets them (the page
- * then starts again). Finished jobs are kept for `retentionMs` and then dropped; at most `maxActive`
- * run at once, more → `busy` (503).
+ * The registry of jobs for long computations (Monte Carlo assessments): started off the request path, polled
+ * for progress, cancellable through an AbortSignal. Where the work runs is the runner's affair: the
+ * assessment jobs use `workerJobRunner` (a worker thread per job, terminated on cancel), tests may pass an
+ * in-process runner. The registry is kept in memory: a restart forgets the jobs (the page then starts
+ * again). Finished jobs are kept for `retentionMs` and then dropped; at most `maxActive` run at once,
+ * more → `busy` (503).
  */
 export type JobState = "queued" | "running" | "succeeded" | "failed" | "cancelled";
 

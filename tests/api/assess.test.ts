@@ -2,6 +2,8 @@ import { describe, expect, it } from "vitest";
 import { POST as assess } from "../../app/api/v1/assess/route";
 import { POST as startJob } from "../../app/api/v1/assess/jobs/route";
 import { DELETE as cancelJob, GET as jobStatus } from "../../app/api/v1/assess/jobs/[id]/route";
+import { GET as health } from "../../app/api/v1/health/route";
+import { liveWorkerCount } from "../../lib/service/worker-job-runner";
 import { culvertDemo } from "../../lib/demo/culvert-demo";
 import { runningVersions } from "../../lib/service/versions";
 import { context, json, jsonRequest } from "./request";
@@ -72,6 +74,27 @@ describe("the assessment job API", () => {
     const later = await json(await jobStatus(jsonRequest(`/assess/jobs/${id}`, "GET"), context({ id })));
     expect(later.state).toBe("cancelled");
     expect(later.progress as number).toBeLessThan(1);
+  });
+
+  it("computes the job in a worker thread: other requests are answered meanwhile, and cancel ends the worker", async () => {
+    const started = await json(await startJob(jsonRequest("/assess/jobs", "POST", monteCarlo(1000)), context()));
+    const id = started.id as string;
+    const statusOf = async () => json(await jobStatus(jsonRequest(`/assess/jobs/${id}`, "GET"), context({ id })));
+    // Past the first progress report the assessment is computing in its worker.
+    for (let waitedMs = 0; ((await statusOf()).progress as number) === 0; waitedMs += 50) {
+      if (waitedMs > 120_000) throw new Error("the job reported no progress");
+      await new Promise((resolve) => setTimeout(resolve, 50));
+    }
+    expect(liveWorkerCount()).toBe(1);
+    const answer = await health(jsonRequest("/health", "GET"), context());
+    expect(answer.status).toBe(200);
+    expect((await statusOf()).state).toBe("running");
+    await cancelJob(jsonRequest(`/assess/jobs/${id}`, "DELETE"), context({ id }));
+    for (let waitedMs = 0; liveWorkerCount() > 0; waitedMs += 20) {
+      if (waitedMs > 30_000) throw new Error("the cancelled job's worker did not exit");
+      await new Promise((resolve) => setTimeout(resolve, 20));
+    }
+    expect((await statusOf()).state).toBe("cancelled");
   });
 
   it("answers 422 at once for invalid input instead of starting a job", async () => {

@@ -7,7 +7,7 @@ export const dynamic = "force-dynamic";
 /** GET: progress (0–1), state and, once succeeded, the result. */
 export const GET = guarded(async (_request, context) => outcomeResponse(assessmentJobs().status(await routeParam(context, "id"))));
 
-/** DELETE: cancel (the computation stops at its next check of the AbortSignal). */
+/** DELETE: cancel (the job's worker thread is terminated at once). */
 export const DELETE = guarded(async (_request, context) => outcomeResponse(assessmentJobs().cancel(await routeParam(context, "id"))));
 
 // Other methods: 405 with a JSON body (Next would answer with an empty one).

@@ -7,27 +7,42 @@ import { thermodynamicHeatAtAge, thermodynamicHeatCurve } from "../../lib/curing
 import { parseCuringInput } from "../../lib/schema/curing-input";
 import cementPresets from "../../lib/data/binders/cement-presets.json";
 import { expectReference } from "../support/reference-check";
+import { molarMassGPerMol } from "../../lib/chem/atomic-weights";
+import { parseFormulaOrThrow } from "../../lib/chem/formula";
 
 const fullReaction = { mode: "degrees", clinkerDegrees: { alite: 1, belite: 1, aluminate: 1, ferrite: 1 } } as const;
 const mix = { waterBinderRatio: 0.5, binderContentKgPerM3: 350 };
 
-function system(input: Record<string, unknown>) {
-  const s = binderSystemFromInput({ mix, age: fullReaction, ...input });
+type PasteOptions = { waterBinderRatio?: number; enable?: readonly string[] };
+
+function system(input: Record<string, unknown>, waterBinderRatio = mix.waterBinderRatio) {
+  const s = binderSystemFromInput({ mix: { ...mix, waterBinderRatio }, age: fullReaction, ...input });
   if (!s.ok) throw new Error(JSON.stringify(s.error));
   return s.value;
 }
 
-function heatOf(input: Record<string, unknown>, temperatureC = 25) {
-  const s = system(input);
-  const paste = hydratePaste(s.composition, { temperatureC, binderContentKgPerM3: mix.binderContentKgPerM3 });
+function heatOf(input: Record<string, unknown>, temperatureC = 25, options: PasteOptions = {}) {
+  const s = system(input, options.waterBinderRatio);
+  const paste = hydratePaste(s.composition, { temperatureC, binderContentKgPerM3: mix.binderContentKgPerM3, enable: options.enable });
   if (!paste.ok) throw new Error(JSON.stringify(paste.error));
   return thermodynamicHeatAtAge({ binder: s.binder, degrees: s.degrees, composition: s.composition, paste: paste.value });
 }
 
-function heatJPerG(input: Record<string, unknown>, temperatureC = 25): number {
-  const h = heatOf(input, temperatureC);
+function heatJPerG(input: Record<string, unknown>, temperatureC = 25, options: PasteOptions = {}): number {
+  const h = heatOf(input, temperatureC, options);
   if (!h.ok) throw new Error(JSON.stringify(h.error));
   return h.value.heatJPerGBinder;
+}
+
+const molarMass = (formula: string) => molarMassGPerMol(parseFormulaOrThrow(formula).elements);
+const c3aGPerMol = molarMass("Ca3Al2O6");
+const gypsumGPerMol = molarMass("CaSO4(H2O)2");
+
+/** Heat per g of `phase` of a mixture given in grams (normalised to the 100 g basis). */
+function heatPerGramOf(phase: string, massesG: Record<string, number>, options: PasteOptions = {}): number {
+  const totalG = Object.values(massesG).reduce((sum, g) => sum + g, 0);
+  const phasesMassPercent = { alite: 0, belite: 0, aluminate: 0, ferrite: 0, ...Object.fromEntries(Object.entries(massesG).map(([id, g]) => [id, (100 * g) / totalG])) };
+  return heatJPerG({ cement: { kind: "phases", phasesMassPercent } }, 25, options) / (massesG[phase] / totalG);
 }
 
 const pure = (phase: string) => ({ kind: "phases", phasesMassPercent: { alite: 0, belite: 0, aluminate: 0, ferrite: 0, [phase]: 100 } });
@@ -119,40 +134,138 @@ describe("thermodynamic heat of hydration: pure phases against calorimetric heat
     });
   });
 
-  // Known deviation (reported, not tuned): the data give about 609 J/g for ferrite, 46 % above Taylor's 418 J/g.
-  // The products differ from Taylor's route (C4AH13 + gibbsite + ferrihydrite + portlandite here) and the C4AF
-  // enthalpy of formation is recalled with low confidence; this check will pass once the data are confirmed.
-  it.fails("gives the heat of ferrite within 15 % of Taylor's 418 J/g (known deviation: about +46 %)", () => {
+  // The aluminate checks run at w/b 0.8 so that water does not run out before the water-rich products form
+  // (ettringite binds 32 H2O per C3A); the heat per g of C3A is that of the whole mixture over its C3A content,
+  // so the gypsum's part of the reaction is counted, as in the cited tables.
+  it("gives the heat of C3A to the hydrogarnet C3AH6 (hydrogarnet allowed) within 5 % of Lerch & Bogue's 866 J/g", () => {
+    expectReference({
+      id: "heat-aluminate-c3ah6-25C",
+      quantity: "Heat of complete hydration of C3A alone (C3A + 6 H → C3AH6)",
+      conditions: "25 °C, w/b 0.5, katoite enabled (the default constraint suppresses it below 50 °C)",
+      source: "Lerch & Bogue 1934, J. Res. NBS 12, 645, C3A 207 cal/g = 866 J/g, as compiled by Bogue 1947, from memory",
+      reference: 866,
+      computed: heatJPerG({ cement: pure("aluminate") }, 25, { enable: ["katoite"] }),
+      tolerance: 0.05,
+      relative: true,
+      unit: "J/g",
+    });
+  });
+
+  it("gives the heat of C3A with three gypsum to ettringite within 5 % of Taylor's 1672 J/g of C3A", () => {
+    expectReference({
+      id: "heat-aluminate-ettringite-25C",
+      quantity: "Heat of C3A + 3 CaSO4·2H2O + 26 H2O → ettringite, per g C3A",
+      conditions: "25 °C, w/b 0.8, gypsum/C3A 3 mol/mol",
+      source: "Taylor 1997, Cement Chemistry 2nd ed., ch. 7 (enthalpies of hydration of the pure phases), from memory",
+      reference: 1672,
+      computed: heatPerGramOf("aluminate", { aluminate: c3aGPerMol, gypsum: 3 * gypsumGPerMol }, { waterBinderRatio: 0.8 }),
+      tolerance: 0.05,
+      relative: true,
+      unit: "J/g",
+    });
+  });
+
+  it("gives the heat of C3A with one gypsum to monosulfate within 10 % of Taylor's 1144 J/g of C3A", () => {
+    expectReference({
+      id: "heat-aluminate-monosulfate-25C",
+      quantity: "Heat of C3A + CaSO4·2H2O + water → monosulfate, per g C3A",
+      conditions: "25 °C, w/b 0.8, gypsum/C3A 1 mol/mol (the equilibrium gives monosulfate-14)",
+      source: "Taylor 1997, Cement Chemistry 2nd ed., ch. 7 (the AFm route of the C3A value in lib/data/curing/clinker-phase-heats.json), from memory",
+      reference: 1144,
+      computed: heatPerGramOf("aluminate", { aluminate: c3aGPerMol, gypsum: gypsumGPerMol }, { waterBinderRatio: 0.8 }),
+      tolerance: 0.1,
+      relative: true,
+      unit: "J/g",
+    });
+  });
+
+  // KNOWN DEVIATION (audited 2026-12-01, not tuned). Target: Taylor 1997 418 J/g (Lerch & Bogue 1934 420 J/g).
+  // The data give 609 J/g for C4AF alone (C4AH13 + gibbsite + ferrihydrite + portlandite) and about 563 J/g
+  // by Taylor's own route C4AF + 2 CH + 10 H → C3AH6 + C3FH6 (both hydrogarnets enabled; the slaking of the
+  // CaO that supplies the CH is subtracted), so the product assumption is not the cause. Hess's law says why:
+  // with ΔfH°(C4AF) = −5080.2 kJ/mol (NBS 1982, lib/data/binders/anhydrous-enthalpies.json), C4AF lies only
+  // 31.3 kJ/mol below C3A + CaO + Fe2O3, so any route to Ca-rich hydrates releases about the C3A heat plus
+  // the slaking of one CaO: 234 + 67 − 31 ≈ 270 kJ/mol ≈ 555 J/g, with Lerch & Bogue's own C3A (866 J/g)
+  // and CaO (1186 J/g) values and the Fe part near thermoneutral (Fe2O3 + 3 H2O → 2 Fe(OH)3: +6.6 kJ/mol here).
+  // The classic 418 J/g (203 kJ/mol) would need ΔfH°(C4AF) about 65–130 kJ/mol more negative than the tabulated
+  // value, i.e. a formation enthalpy from the oxides of about −105 to −165 kJ/mol against −38.6 (−43.3 for C2F,
+  // Robie & Hemingway 1995). The deviation sits in the classic ferrite heat or in ΔfH°(C4AF), not in the bookkeeping.
+  const ferriteAloneJPerG = heatJPerG({ cement: pure("ferrite") });
+  const ferriteHydrogarnetRouteJPerG = (() => {
+    const ferriteG = molarMass("Ca4Al2Fe2O10");
+    const limeG = 2 * molarMass("CaO");
+    const both = heatJPerG({ cement: { kind: "phases", phasesMassPercent: { alite: 0, belite: 0, aluminate: 0, ferrite: (100 * ferriteG) / (ferriteG + limeG), freeLime: (100 * limeG) / (ferriteG + limeG) } } }, 25, { enable: ["katoite", "fe-katoite"] });
+    const slakingJPerG = heatJPerG({ cement: pure("freeLime") });
+    return (both * (ferriteG + limeG) - slakingJPerG * limeG) / ferriteG;
+  })();
+
+  it.fails("gives the heat of ferrite within 15 % of Taylor's 418 J/g (KNOWN DEVIATION: about 609 J/g, +46 %)", () => {
     expectReference({
       id: "heat-ferrite-25C",
       quantity: "Heat of complete hydration of C4AF",
       conditions: "25 °C, w/b 0.5",
       source: "Taylor 1997, Cement Chemistry 2nd ed., ch. 7, from memory",
       reference: 418,
-      computed: heatJPerG({ cement: pure("ferrite") }),
+      computed: ferriteAloneJPerG,
       tolerance: 0.15,
       relative: true,
       unit: "J/g",
     });
   });
+
+  it("KNOWN DEVIATION pin: ferrite gives 580–640 J/g alone and 530–600 J/g by the hydrogarnet route, both far above the classic 418–420 J/g", () => {
+    // What the code gives (see the comment above for the target and the reason); a change of the bookkeeping or
+    // of the Fe/Al hydrate data moves these and must update the comment.
+    expect(ferriteAloneJPerG).toBeGreaterThan(580);
+    expect(ferriteAloneJPerG).toBeLessThan(640);
+    expect(ferriteHydrogarnetRouteJPerG).toBeGreaterThan(530);
+    expect(ferriteHydrogarnetRouteJPerG).toBeLessThan(600);
+  });
 });
 
 describe("thermodynamic heat of hydration: ordinary Portland cement (issue 6 acceptance)", () => {
-  // Known deviation (reported, not tuned): the fully hydrated CEM I preset gives about 544 J/g at 25 °C, 4.5 %
-  // above the upper end of the published range. The pure-phase checks above locate most of it in alite (+6 %)
-  // and ferrite (+46 %), i.e. in recalled enthalpies of C-S-H, C4AF and the Fe hydrates.
-  it.fails("puts the total heat of a fully hydrated ordinary Portland cement in the published 450–520 J/g range (known deviation: about 544 J/g)", () => {
-    const q = heatJPerG(cemI);
+  // KNOWN DEVIATION (audited 2026-12-01, not tuned). Target: 450–520 J/g for a fully hydrated ordinary Portland
+  // cement (Taylor 1997; Lerch & Bogue 1934), and the per-phase sums 481 J/g (Taylor set) and 470 J/g (Lerch &
+  // Bogue set) for this preset. The CEM I preset gives 543.5 J/g at 25 °C. Decomposition, J per g cement: the
+  // increment of each clinker phase averaged over the orders of adding the four phases (increments are not
+  // additive otherwise; 20 of the 24 orders, the aluminate + ferrite-only paste does not converge), with the MgO
+  // held in the clinker (1.8 %, reacting with the clinker) split off at its periclase → brucite heat, 920 J/g:
+  //   alite      303 (552 J/g C3S)   Taylor 284 (517)   excess +19
+  //   belite      50 (293 J/g C2S)   Taylor  45 (262)   excess  +5
+  //   aluminate   91 with the sulfate and calcite it binds;  Taylor 88 (1144, AFm route)  +3
+  //   ferrite     69 (756 J/g C4AF)  Taylor  38 (418)   excess +31
+  //   free lime, sulfate dissolution, calcite (no clinker reacted) 14; Taylor CaO 12     +2
+  //   MgO         17                 Taylor  15 (841)   excess  +2
+  // Half the excess is the ferrite (see the ferrite comment above: the classic ferrite heat is not reproducible
+  // by Hess's law from the tabulated ΔfH° of C4AF) and a third the alite (C3S 546 J/g alone against 500–517:
+  // 7 kJ/mol on a 118 kJ/mol reaction heat, within the uncertainty of ΔfH° of C3S and of the C-S-H end-members).
+  // With Kulik's (2011) four-end-member C-S-H, tried in the data on the same day, the total is 537 J/g (alite
+  // 538, belite 265 J/g alone) and the Lerch & Bogue comparison +14.3 %, which would turn that pin below.
+  // No bookkeeping error was found: water (mixing + LOI) cancels against the pore solution and hydrate water by
+  // element balance, both sides are at 25 °C, and the calcium sulfate is counted as the partition gives it
+  // (anhydrite + LOI water as liquid: 4 J/g more than gypsum would give).
+  const cemITotalJPerG = heatJPerG(cemI);
+  const cemIWithoutFerriteJPerG = heatJPerG({ ...cemI, age: { mode: "degrees", clinkerDegrees: { alite: 1, belite: 1, aluminate: 1, ferrite: 0 } } });
+  const cemIFerriteJPerGFerrite = (cemITotalJPerG - cemIWithoutFerriteJPerG) / cemIPhaseFractions().C4AF;
+
+  it.fails("puts the total heat of a fully hydrated ordinary Portland cement in the published 450–520 J/g range (KNOWN DEVIATION: about 544 J/g)", () => {
     expectReference({
       id: "heat-opc-total-25C",
       quantity: "Total heat of complete hydration of an ordinary Portland cement",
       conditions: "CEM I preset (typical), 25 °C, w/b 0.5, all clinker reacted",
       source: "Taylor 1997, Cement Chemistry 2nd ed., ch. 7; Lerch & Bogue 1934, J. Res. NBS 12, 645 (totals about 450-520 J/g), from memory",
       reference: 485,
-      computed: q,
+      computed: cemITotalJPerG,
       tolerance: 35,
       unit: "J/g",
     });
+  });
+
+  it("KNOWN DEVIATION pin: the fully hydrated CEM I gives 525–555 J/g, above the published range by the ferrite and alite excesses", () => {
+    // 543.5 J/g with the data of 2026-12-01 (537 J/g with the four-end-member C-S-H).
+    // What the code gives (target and reason in the comment above); a change outside this band must update it.
+    expect(cemITotalJPerG).toBeGreaterThan(525);
+    expect(cemITotalJPerG).toBeLessThan(555);
   });
 
   it("agrees with the classic per-phase heat of Taylor (1997) within 15 %", () => {
@@ -163,15 +276,16 @@ describe("thermodynamic heat of hydration: ordinary Portland cement (issue 6 acc
       conditions: "CEM I preset (typical), 25 °C, w/b 0.5",
       source: "Taylor 1997, Cement Chemistry 2nd ed., ch. 7 per-phase enthalpies (lib/data/curing/clinker-phase-heats.json), from memory",
       reference: classic,
-      computed: heatJPerG(cemI),
+      computed: cemITotalJPerG,
       tolerance: 0.15,
       relative: true,
       unit: "J/g",
     });
   });
 
-  // Known deviation: about 15.7 % above the Lerch & Bogue sum (470 J/g) — just outside the 15 % of the issue.
-  it.fails("agrees with the classic per-phase heat of Lerch & Bogue (1934) within 15 % (known deviation: about +16 %)", () => {
+  // KNOWN DEVIATION: 543.5 J/g is 15.7 % above the Lerch & Bogue sum (470 J/g), just outside the 15 % of the
+  // issue; the excess is the ferrite and alite of the decomposition above.
+  it.fails("agrees with the classic per-phase heat of Lerch & Bogue (1934) within 15 % (KNOWN DEVIATION: about +15.7 %)", () => {
     const classic = perPhaseHeatJPerG(cemIPhaseFractions(), 1, "lerch-bogue");
     expectReference({
       id: "heat-opc-vs-lerch-bogue-per-phase",
@@ -179,11 +293,33 @@ describe("thermodynamic heat of hydration: ordinary Portland cement (issue 6 acc
       conditions: "CEM I preset (typical), 25 °C, w/b 0.5",
       source: "Lerch & Bogue 1934, J. Res. NBS 12, 645, as compiled by Bogue 1947 (lib/data/curing/clinker-phase-heats.json), from memory",
       reference: classic,
-      computed: heatJPerG(cemI),
+      computed: cemITotalJPerG,
       tolerance: 0.15,
       relative: true,
       unit: "J/g",
     });
+  });
+
+  // KNOWN DEVIATION: the ferrite's increment in the cement (its Fe in Fe-siliceous hydrogarnet, which takes
+  // portlandite and silica from the C-S-H, and its Al in carboaluminate AFm with the calcite) is about 681 J/g
+  // C4AF, above even its stand-alone 609 J/g; target 420 J/g (reason in the ferrite comment above).
+  it.fails("credits the ferrite of the CEM I with Lerch & Bogue's 420 J/g within 15 % (KNOWN DEVIATION: about 681 J/g)", () => {
+    expectReference({
+      id: "heat-opc-ferrite-increment-25C",
+      quantity: "Heat added by the ferrite of the CEM I (with − without ferrite reacted), per g ferrite",
+      conditions: "CEM I preset (typical), 25 °C, w/b 0.5, other clinker phases fully reacted",
+      source: "Lerch & Bogue 1934, J. Res. NBS 12, 645, C4AF 100 cal/g = 420 J/g, as compiled by Bogue 1947, from memory",
+      reference: 420,
+      computed: cemIFerriteJPerGFerrite,
+      tolerance: 0.15,
+      relative: true,
+      unit: "J/g",
+    });
+  });
+
+  it("KNOWN DEVIATION pin: the ferrite of the CEM I adds 620–760 J/g of ferrite", () => {
+    expect(cemIFerriteJPerGFerrite).toBeGreaterThan(620);
+    expect(cemIFerriteJPerGFerrite).toBeLessThan(760);
   });
 });
 

@@ -39,6 +39,13 @@ import { SpeciesEnthalpyFailure, speciesEnthalpyResolver } from "./species-entha
  * Mass and element balance are checked, not assumed: the elements of the reactants must equal the composition's
  * reacted elements, and those of the products (solids, dissolved species, solvent, bound alkali) must equal them too,
  * each to `elementBalanceRelativeTolerance`; otherwise a typed error.
+ *
+ * Accuracy (audited 2026-12-01 against calorimetric heats; figures in tests/curing/thermodynamic-heat.test.ts):
+ * free lime, alite, belite and C3A (to C3AH6, ettringite or monosulfate) come within 1–6 % of Taylor (1997) or
+ * Lerch & Bogue (1934); ferrite gives about 560–680 J/g of C4AF against the classic 420 J/g, a gap that Hess's law
+ * with the tabulated ΔfH° of C4AF cannot close. A fully hydrated CEM I therefore gives about 544 J/g at 25 °C,
+ * above the published 450–520 J/g, half of the excess from the ferrite and a third from the alite: the heat, and
+ * the temperature rise it drives, errs high.
  */
 export type ThermodynamicHeat = {
   temperatureC: number;

@@ -32,7 +32,8 @@ export function projectRoot(): string {
   return process.env.HYDRASTATE_ROOT ?? process.cwd();
 }
 
-const fromRoot = (path: string) => (isAbsolute(path) ? path : join(projectRoot(), path));
+// Not traced by the bundler: these files are run from the project directory, never copied into the build.
+const fromRoot = (path: string) => (isAbsolute(path) ? path : join(/*turbopackIgnore: true*/ projectRoot(), path));
 
 /** Workers started and not yet exited (for the tests and the health of the process). */
 const liveWorkers = new Set<Worker>();

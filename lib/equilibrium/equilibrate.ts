@@ -5,6 +5,7 @@ import { speciesAtTemperatureResult } from "../data/species-at-temperature";
 import { equilibrateInput, type EquilibrateInput } from "../schema/equilibrate-input";
 import { formatIssues } from "../schema/format-issues";
 import { saturationPressureBar } from "../thermo/water-saturation-pressure";
+import { individualIonParameters } from "../data/ion-size-parameters";
 import { sodiumChlorideDominatedParameters, truesdellJonesModel, type TruesdellJonesParameters } from "../thermo/truesdell-jones";
 import type { EquilibriumOutcome } from "./failure";
 import { minimise } from "./minimise";
@@ -128,7 +129,12 @@ export function equilibrate(raw: unknown, options: { warmStart?: SerializedState
     elementTotalsMol: totals.value,
     fixedPartialPressuresBar: input.fixedPartialPressuresBar,
     suppressedPhases: input.suppressedPhases,
-    activity: input.activityModel ? { ...input.activityModel, neutral: "unity" } : undefined,
+    // Natural-water systems: the individual Truesdell–Jones å, ḃ where published, the common pair otherwise.
+    activity: {
+      ...(input.activityModel ?? sodiumChlorideDominatedParameters),
+      neutral: "unity",
+      individual: input.individualIonParameters ? individualIonParameters() : undefined,
+    },
     timeLimitMs: input.timeLimitMs,
     warmStart: options.warmStart,
     dataset: options.dataset,

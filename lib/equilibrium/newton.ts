@@ -44,9 +44,24 @@ export type AqueousEvaluation = {
   totalMolality: number;
   chargedMolality: number;
   lnWaterActivity: number;
-  /** ∂ ln a_w / ∂(total molality, charged molality, I) */
-  dLnAw: [number, number, number];
+  /** Per solute, ∂ ln a_w / ∂ m_i = −M_w c_i(I) (0 for non-solutes). */
+  dLnAwDMolality: Float64Array;
+  /** ∂ ln a_w / ∂ I at fixed molalities. */
+  dLnAwDI: number;
 };
+
+/** ln γ, d ln γ/dI, c and dc/dI of one activity-parameter key at I (central differences in I). */
+function activityTerms(p: EquilibriumProblem, speciesId: string, charge: number, ionicStrength: number): [number, number, number, number] {
+  const h = 1e-5 * ionicStrength;
+  const lower = Math.max(0, ionicStrength - h);
+  const width = ionicStrength + h - lower;
+  const m = p.activity;
+  const lg = LN10 * m.log10Gamma(speciesId, charge, ionicStrength);
+  const dlg = width > 0 ? (LN10 * (m.log10Gamma(speciesId, charge, ionicStrength + h) - m.log10Gamma(speciesId, charge, lower))) / width : 0;
+  const c = m.waterCoefficient(speciesId, charge, ionicStrength);
+  const dc = width > 0 ? (m.waterCoefficient(speciesId, charge, ionicStrength + h) - m.waterCoefficient(speciesId, charge, lower)) / width : 0;
+  return [lg, dlg, c, dc];
+}
 
 export function evaluateAqueous(p: EquilibriumProblem, lambda: Float64Array, lnIonicStrength: number): AqueousEvaluation {
   const nS = p.species.length;
@@ -54,47 +69,40 @@ export function evaluateAqueous(p: EquilibriumProblem, lambda: Float64Array, lnI
   const molality = new Float64Array(nS);
   const lnGamma = new Float64Array(nS);
   const dLnGammaDI = new Float64Array(nS);
+  const dLnAwDMolality = new Float64Array(nS);
   const ionicStrength = Math.exp(lnIonicStrength);
   let totalMolality = 0;
   let chargedMolality = 0;
-  const cache = new Map<number, [number, number]>();
-  const gammaFor = (z: number): [number, number] => {
-    let entry = cache.get(z);
-    if (!entry) {
-      const h = 1e-5 * ionicStrength;
-      const up = p.activity.log10Gamma(z, ionicStrength + h);
-      const down = p.activity.log10Gamma(z, Math.max(0, ionicStrength - h));
-      entry = [LN10 * p.activity.log10Gamma(z, ionicStrength), (LN10 * (up - down)) / (ionicStrength + h - Math.max(0, ionicStrength - h))];
-      cache.set(z, entry);
-    }
-    return entry;
-  };
+  let sumMC = 0;
+  let sumMDc = 0;
+  const cache = new Map<string, [number, number, number, number]>();
   if (p.aqueous >= 0) {
     for (const i of p.phases[p.aqueous].species) {
       if (i === p.water) continue;
-      const [lg, dlg] = gammaFor(p.species[i].charge);
+      const { id, charge } = p.species[i];
+      const key = p.activityKey[i];
+      let terms = cache.get(key);
+      if (!terms) {
+        terms = activityTerms(p, id, charge, ionicStrength);
+        cache.set(key, terms);
+      }
+      const [lg, dlg, c, dc] = terms;
       let t = -p.species[i].g - lg;
       for (let j = 0; j < nE; j++) t += p.stoich[i * nE + j] * lambda[j];
       const m = safeExp(t);
       molality[i] = m;
       lnGamma[i] = lg;
       dLnGammaDI[i] = dlg;
+      dLnAwDMolality[i] = -WATER_MOLAR_MASS_KG_PER_MOL * c;
+      sumMC += m * c;
+      sumMDc += m * dc;
       totalMolality += m;
-      if (p.species[i].charge !== 0) chargedMolality += m;
+      if (charge !== 0) chargedMolality += m;
     }
   }
-  const f = (mt: number, mc: number, is: number) => p.activity.lnWaterActivity(mt, mc, is);
-  const lnWaterActivity = f(totalMolality, chargedMolality, ionicStrength);
-  const d = (v: number) => 1e-6 * Math.max(v, 1e-12);
-  const hT = d(totalMolality);
-  const hC = d(chargedMolality);
-  const hI = d(ionicStrength);
-  const dLnAw: [number, number, number] = [
-    (f(totalMolality + hT, chargedMolality, ionicStrength) - lnWaterActivity) / hT,
-    (f(totalMolality, chargedMolality + hC, ionicStrength) - lnWaterActivity) / hC,
-    (f(totalMolality, chargedMolality, ionicStrength + hI) - lnWaterActivity) / hI,
-  ];
-  return { ionicStrength, molality, lnGamma, dLnGammaDI, totalMolality, chargedMolality, lnWaterActivity, dLnAw };
+  const lnWaterActivity = -WATER_MOLAR_MASS_KG_PER_MOL * sumMC;
+  const dLnAwDI = -WATER_MOLAR_MASS_KG_PER_MOL * sumMDc;
+  return { ionicStrength, molality, lnGamma, dLnGammaDI, totalMolality, chargedMolality, lnWaterActivity, dLnAwDMolality, dLnAwDI };
 }
 
 /** exp(a_i·λ − g_i) for the members of a solid solution or gas phase. */
@@ -179,10 +187,9 @@ export function assemble(p: EquilibriumProblem, s: SolverState): Assembly {
       let halfZ2m = 0;
       const dHalfZ2mDLambda = new Float64Array(nE);
       let halfZ2mGammaI = 0;
-      const dMtDLambda = new Float64Array(nE);
-      const dMcDLambda = new Float64Array(nE);
-      let dMtDLnI = 0;
-      let dMcDLnI = 0;
+      // ∂ ln a_w/∂λ_l = Σ_i (∂ ln a_w/∂m_i) m_i a_il and ∂ ln a_w/∂ ln I through the molalities.
+      const dLnAwDLambda = new Float64Array(nE);
+      let dLnAwDLnIViaMolality = 0;
       for (const i of p.phases[phase].species) {
         if (i === p.water) {
           for (let j = 0; j < nE; j++) {
@@ -199,8 +206,8 @@ export function assemble(p: EquilibriumProblem, s: SolverState): Assembly {
         const gI = aq.dLnGammaDI[i] * I; // d ln γ / d ln I
         halfZ2m += 0.5 * z * z * m;
         halfZ2mGammaI += 0.5 * z * z * m * gI;
-        dMtDLnI -= m * gI;
-        if (z !== 0) dMcDLnI -= m * gI;
+        const w = aq.dLnAwDMolality[i];
+        dLnAwDLnIViaMolality -= w * m * gI;
         const nz = nonZero(p, i);
         for (let x = 0; x < nz.length; x++) {
           const j = nz[x];
@@ -209,11 +216,10 @@ export function assemble(p: EquilibriumProblem, s: SolverState): Assembly {
           scale[j] += Math.abs(a * amount * m);
           matrix[j * size + col] += a * m;
           matrix[j * size + lnICol] -= a * amount * m * gI;
-          const w = amount * a * m;
-          for (let y = 0; y < nz.length; y++) matrix[j * size + nz[y]] += w * st[i * nE + nz[y]];
+          const weight = amount * a * m;
+          for (let y = 0; y < nz.length; y++) matrix[j * size + nz[y]] += weight * st[i * nE + nz[y]];
           dHalfZ2mDLambda[j] += 0.5 * z * z * m * a;
-          dMtDLambda[j] += m * a;
-          if (z !== 0) dMcDLambda[j] += m * a;
+          dLnAwDLambda[j] += w * m * a;
         }
       }
       // Ionic-strength row.
@@ -224,12 +230,11 @@ export function assemble(p: EquilibriumProblem, s: SolverState): Assembly {
       for (let l = 0; l < nE; l++) J(lnIRow, l, -dHalfZ2mDLambda[l] / halfZ2m);
       J(lnIRow, lnICol, 1 + halfZ2mGammaI / halfZ2m);
       // Water condition: a_w·λ − g_w − ln a_w = 0.
-      const [fT, fC, fI] = aq.dLnAw;
       const c = speciesAffinity(p, p.water, s.lambda) - aq.lnWaterActivity;
       rhs[row] = -c;
       conditionResidual = Math.max(conditionResidual, Math.abs(c));
-      for (let l = 0; l < nE; l++) J(row, l, st[p.water * nE + l] - fT * dMtDLambda[l] - fC * dMcDLambda[l]);
-      J(row, lnICol, -(fT * dMtDLnI + fC * dMcDLnI + fI * I));
+      for (let l = 0; l < nE; l++) J(row, l, st[p.water * nE + l] - dLnAwDLambda[l]);
+      J(row, lnICol, -(dLnAwDLnIViaMolality + aq.dLnAwDI * I));
     } else if (kind === "solid-solution" || kind === "gas") {
       const members = p.phases[phase].species;
       const y = memberTerms(p, phase, s.lambda);

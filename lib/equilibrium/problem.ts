@@ -50,6 +50,8 @@ export type EquilibriumProblem = {
   /** Per species, the element columns with a non-zero coefficient (most species have three or four). */
   nonZero: Int32Array[];
   activity: AqueousActivityModel;
+  /** Per species, the activity model's parameter key (solutes sharing a key share γ); "" for non-solutes. */
+  activityKey: string[];
 };
 
 export type ProblemInput = {
@@ -147,12 +149,17 @@ export function buildProblem(input: ProblemInput): EquilibriumOutcome<Equilibriu
   }
   return {
     ok: true,
-    value: { ...template.problem, totals: Float64Array.from(template.keep, (j) => fullTotals[j]), activity: input.activity },
+    value: {
+      ...template.problem,
+      totals: Float64Array.from(template.keep, (j) => fullTotals[j]),
+      activity: input.activity,
+      activityKey: template.problem.species.map((s) => (s.phase === template.problem.aqueous ? input.activity.parameterKey(s.id, s.charge) : "")),
+    },
   };
 }
 
 type ProblemTemplate = {
-  problem: Omit<EquilibriumProblem, "totals" | "activity">;
+  problem: Omit<EquilibriumProblem, "totals" | "activity" | "activityKey">;
   fullElements: string[];
   fullChargeRow: number;
   keep: number[];

@@ -18,13 +18,21 @@ export type SpeciesAtTemperature = {
   molarVolumeCm3PerMol?: number;
 };
 
-/** Activity model of the aqueous solution at the calculation temperature. */
+/**
+ * Activity model of the aqueous solution at the calculation temperature.
+ *
+ * Water activity is written as ln a(H2O) = −M_w Σᵢ mᵢ cᵢ(I), a sum over solutes of their molality times
+ * a coefficient that depends only on the ionic strength; every model whose solute terms depend on I alone
+ * and that satisfies Gibbs–Duhem along the dilution path has this form (see `lib/thermo/truesdell-jones.ts`).
+ */
 export interface AqueousActivityModel {
-  /** log10 γ of a solute of the given charge at ionic strength I (mol/kg); neutral solutes included. */
-  log10Gamma(charge: number, ionicStrengthMolPerKg: number): number;
   /**
-   * ln a(H2O), consistent with log10Gamma through the Gibbs–Duhem relation, from the total solute
-   * molality, the molality of charged solutes and the ionic strength (all mol/kg).
+   * Solutes with the same key have the same γ and water coefficient at every I (for a common-ion-size model,
+   * the charge alone); the engine evaluates each key once per iteration.
    */
-  lnWaterActivity(totalSoluteMolPerKg: number, chargedSoluteMolPerKg: number, ionicStrengthMolPerKg: number): number;
+  parameterKey(speciesId: string, charge: number): string;
+  /** log10 γ of a solute of the given id and charge at ionic strength I (mol/kg); neutral solutes included. */
+  log10Gamma(speciesId: string, charge: number, ionicStrengthMolPerKg: number): number;
+  /** cᵢ(I), dimensionless, in ln a(H2O) = −M_w Σᵢ mᵢ cᵢ(I), consistent with log10Gamma through Gibbs–Duhem. */
+  waterCoefficient(speciesId: string, charge: number, ionicStrengthMolPerKg: number): number;
 }

@@ -26,6 +26,8 @@ export const equilibrateInput = z
         bDotKgPerMol: z.number().min(0).max(0.3),
       })
       .optional(),
+    /** Use the individual Truesdell–Jones å and ḃ of the ions that have them (lib/data/ion-size-parameters.json). */
+    individualIonParameters: z.boolean({ error: "individualIonParameters must be true or false" }).default(true),
     timeLimitMs: z.number().int().min(10).max(60_000).default(5000),
   })
   .strict();

@@ -4,46 +4,54 @@ import { waterMolarMassKgPerMol } from "./physical-constants";
 import { ThermoInputError, requireInRange } from "./thermo-error";
 
 /**
- * Extended Debye–Hückel ("b-dot") activity model with one ion size and one b-dot for all ions
- * (Helgeson 1969, Am. J. Sci. 267, 729; Helgeson, Kirkham & Flowers 1981, Am. J. Sci. 281, 1249),
- * the form with an added linear term that Truesdell & Jones (1974, J. Res. USGS 2, 233) also used:
+ * Extended Debye–Hückel ("b-dot") activity model (Helgeson 1969, Am. J. Sci. 267, 729; Helgeson, Kirkham &
+ * Flowers 1981, Am. J. Sci. 281, 1249) with one common ion size å and b-dot ḃ, and optionally, for the ions
+ * that have them, the individual å and ḃ of Truesdell & Jones (1974, J. Res. U.S. Geol. Surv. 2, 233):
  *
- *   charged solute i:  log₁₀ γᵢ = −A zᵢ² √I / (1 + B å √I) + ḃ I
- *   neutral solute:    log₁₀ γ = 0 ("unity") or ḃ I ("salting-out"), as chosen
+ *   charged solute i:  log₁₀ γᵢ = −A zᵢ² √I / (1 + B åᵢ √I) + ḃᵢ I
+ *   neutral solute:    log₁₀ γ = 0 ("unity") or ḃ I ("salting-out", common ḃ), as chosen
  *
  * A, B from `debye-huckel.ts` at the temperature of the model; I in mol/kg; å in Å; ḃ in kg/mol.
  *
  * Water activity from the Gibbs–Duhem relation. Per kilogram of water,
  *   (1/M_w) d ln a_w = −Σᵢ mᵢ d ln(mᵢ γᵢ).
- * Integrate along the dilution path mᵢ = λ mᵢ⁰ (λ from 0 to 1), on which I = λ I⁰ and the ratios
- * m_charged / I and m_neutral / I stay fixed:
- *   Σ mᵢ d ln mᵢ = d m_T                                          → m_T
- *   Σ_charged mᵢ d(−A zᵢ² x/(1 + a x)), x = √I, a = B å, Σ mᵢ zᵢ² = 2I = 2x²
- *       = −2A x² dx / (1 + a x)²                                   → −2A F(x)
- *   Σ_γ mᵢ d(ḃ I) = ḃ m_γ dI, with m_γ ∝ I on the path           → ḃ m_γ I / 2
- * where F(x) = ∫₀ˣ t²/(1 + a t)² dt = [(1 + a x) − 2 ln(1 + a x) − 1/(1 + a x)] / a³ and m_γ is the
- * molality of the solutes carrying the ḃ I term (charged, plus neutral for "salting-out"). Hence
+ * Integrate along the dilution path mᵢ = λ mᵢ⁰ (λ from 0 to 1), on which I = λ I⁰ and every mᵢ / I stays
+ * fixed:
+ *   Σ mᵢ d ln mᵢ = d m_T                                                        → m_T
+ *   mᵢ d(−A zᵢ² x/(1 + aᵢ x)), x = √I, aᵢ = B åᵢ, mᵢ = (mᵢ⁰/I⁰) x²              → −A zᵢ² mᵢ F(x, aᵢ)/I
+ *   mᵢ d(ḃᵢ I) with mᵢ ∝ I on the path                                         → ḃᵢ mᵢ I / 2
+ * where F(x, a) = ∫₀ˣ t²/(1 + a t)² dt = [(1 + a x) − 2 ln(1 + a x) − 1/(1 + a x)] / a³. Hence
  *
- *   ln a_w = −M_w [ m_T − 2 ln10 · A · F(√I) + ln10 · ḃ · m_γ · I / 2 ],   M_w = 0.01801528 kg/mol,
+ *   ln a_w = −M_w Σᵢ mᵢ cᵢ(I),   cᵢ = 1 − ln10 · A zᵢ² F(√I, aᵢ)/I + ln10 · ḃᵢ I / 2,   M_w = 0.01801528 kg/mol,
  *
- * and the osmotic coefficient is φ = −ln a_w / (M_w m_T).
+ * (ḃᵢ = 0 for neutral solutes under "unity"), and the osmotic coefficient is φ = −ln a_w / (M_w m_T). With one
+ * common å, Σ mᵢ zᵢ² = 2I turns the Debye–Hückel part into −2 ln10 · A F(√I, a).
  *
- * Consistency: the Debye–Hückel part satisfies Gibbs–Duhem for any change of composition. The ḃ I term
- * with one ḃ for ions of different charge is not an exact differential (∂ ln γᵢ/∂mⱼ ≠ ∂ ln γⱼ/∂mᵢ when
- * zᵢ² ≠ zⱼ²), a known property of this model, so Gibbs–Duhem holds exactly only along paths that keep
- * m_γ / I fixed (dilution or concentration at fixed proportions, e.g. evaporation). The tests check both.
+ * Consistency: with one å the Debye–Hückel part satisfies Gibbs–Duhem for any change of composition. The
+ * ḃ I terms, and Debye–Hückel terms with different åᵢ, are not an exact differential (∂ ln γᵢ/∂mⱼ ≠
+ * ∂ ln γⱼ/∂mᵢ), a known property of this model family, so Gibbs–Duhem then holds exactly only along paths
+ * that keep the proportions mᵢ / I fixed (dilution or concentration, e.g. evaporation). The tests check both.
  *
  * No cap on I is applied: the expressions are finite and smooth for every I ≥ 0. The model is meant for
  * I up to about 1 mol/kg (`truesdellJonesValidIonicStrengthMolPerKg`, common practice; Helgeson 1969
  * fitted NaCl solutions to about 3 mol/kg); callers should flag results beyond it.
  */
-export type TruesdellJonesParameters = {
-  /** Common ion-size parameter å, Å. */
+/** å and ḃ of one ion. */
+export type IonParameters = {
+  /** Ion-size parameter å, Å. */
   ionSizeAngstrom: number;
-  /** Common b-dot ḃ, kg/mol. */
+  /** b-dot ḃ, kg/mol. */
   bDotKgPerMol: number;
-  /** Neutral solutes: γ = 1 ("unity") or log₁₀ γ = ḃ I ("salting-out"). */
+};
+
+export type TruesdellJonesParameters = IonParameters & {
+  /** Neutral solutes: γ = 1 ("unity") or log₁₀ γ = ḃ I ("salting-out"), with the common ḃ. */
   neutral: "unity" | "salting-out";
+  /**
+   * Ions with their own published å and ḃ (Truesdell & Jones 1974), by species id; every other ion
+   * takes the common pair above.
+   */
+  individual?: Record<string, IonParameters>;
 };
 
 /** NaCl-dominated solutions: å = 3.72 Å, ḃ = 0.064 kg/mol at 25 °C (Helgeson, Kirkham & Flowers 1981). Neutral γ = 1. */
@@ -100,46 +108,87 @@ function requireMolality(field: string, valueMolPerKg: number): void {
   }
 }
 
+/** One solute in a solution: id (for individual parameters), charge and molality, mol/kg. */
+export type SoluteMolality = { speciesId: string; charge: number; molalityMolPerKg: number };
+
+/**
+ * ln a(H2O) = −M_w Σᵢ mᵢ cᵢ(I) of a solution, I = ½ Σ mᵢ zᵢ² (mol/kg). A convenience over
+ * `waterCoefficient` for checks and callers outside the engine.
+ */
+export function lnWaterActivityOf(model: AqueousActivityModel, solutes: SoluteMolality[]): number {
+  let ionicStrength = 0;
+  for (const s of solutes) {
+    requireMolality("molalityMolPerKg", s.molalityMolPerKg);
+    ionicStrength += 0.5 * s.molalityMolPerKg * s.charge * s.charge;
+  }
+  let sum = 0;
+  for (const s of solutes) sum += s.molalityMolPerKg * model.waterCoefficient(s.speciesId, s.charge, ionicStrength);
+  return -waterMolarMassKgPerMol * sum;
+}
+
+/** F(x, a)/x² (x = √I), the ratio the water coefficient needs; finite (→ 0) as x → 0. */
+function osmoticIntegralOverIonicStrength(x: number, a: number): number {
+  if (x === 0) return 0;
+  return debyeHuckelOsmoticIntegral(x, a) / (x * x);
+}
+
+function requireIonParameters(field: string, ionSizeAngstrom: number, bDotKgPerMol: number): void {
+  // Ion sizes in the literature lie between about 2 and 11 Å (Kielland 1937); 0 < å ≤ 20 Å is accepted.
+  requireInRange(`${field}.ionSizeAngstrom`, ionSizeAngstrom, 0, 20, "Å");
+  if (ionSizeAngstrom === 0) {
+    throw new ThermoInputError("below-minimum", `${field}.ionSizeAngstrom`, 0, 0, `${field}.ionSizeAngstrom must be greater than 0 Å`);
+  }
+  // Published b-dot values are of order −0.05 to 0.2 kg/mol; |ḃ| ≤ 1 kg/mol is accepted.
+  requireInRange(`${field}.bDotKgPerMol`, bDotKgPerMol, -1, 1, "kg/mol");
+}
+
 /**
  * The b-dot activity model at `temperatureK` (273.15–373.15 K, 1 bar). `params` defaults to the
- * NaCl-dominated set. Throws ThermoInputError for a temperature out of range or invalid parameters;
- * the returned functions throw it for negative or non-finite molalities.
+ * NaCl-dominated set. Solutes listed in `params.individual` use their own å and ḃ (the Truesdell–Jones
+ * form); the others use the common pair. Throws ThermoInputError for a temperature out of range or invalid
+ * parameters; the returned functions throw it for negative or non-finite ionic strength.
+ *
+ * Water coefficient (derivation in the header): cᵢ(I) = 1 − ln10 · A zᵢ² F(√I, B åᵢ)/I + ln10 · ḃᵢ I / 2,
+ * with ḃᵢ = 0 for neutral solutes under "unity". For one common å, Σ mᵢ zᵢ² = 2I gives back the
+ * closed form ln a_w = −M_w [m_T − 2 ln10 A F + ln10 ḃ m_γ I / 2].
  */
 export function truesdellJonesModel(temperatureK: number, params: TruesdellJonesParameters = sodiumChlorideDominatedParameters): AqueousActivityModel {
-  // Ion sizes in the literature lie between about 2 and 11 Å (Kielland 1937); 0 < å ≤ 20 Å is accepted.
-  requireInRange("params.ionSizeAngstrom", params.ionSizeAngstrom, 0, 20, "Å");
-  if (params.ionSizeAngstrom === 0) {
-    throw new ThermoInputError("below-minimum", "params.ionSizeAngstrom", 0, 0, "params.ionSizeAngstrom must be greater than 0 Å");
-  }
-  // Published b-dot values are of order 0.01–0.2 kg/mol; |ḃ| ≤ 1 kg/mol is accepted.
-  requireInRange("params.bDotKgPerMol", params.bDotKgPerMol, -1, 1, "kg/mol");
+  requireIonParameters("params", params.ionSizeAngstrom, params.bDotKgPerMol);
   if (params.neutral !== "unity" && params.neutral !== "salting-out") {
     throw new ThermoInputError("missing-field", "params.neutral", undefined, undefined, `params.neutral must be "unity" or "salting-out"`);
   }
+  const individual = params.individual ?? {};
+  for (const [id, ion] of Object.entries(individual)) requireIonParameters(`params.individual.${id}`, ion.ionSizeAngstrom, ion.bDotKgPerMol);
   const { aKgHalfPerMolHalf: a, bKgHalfPerMolHalfPerAngstrom: b } = debyeHuckelParameters(temperatureK);
-  const ionSizeTerm = b * params.ionSizeAngstrom;
-  const bDot = params.bDotKgPerMol;
   const neutralCarriesBDot = params.neutral === "salting-out";
+  const parametersOf = (speciesId: string, charge: number): IonParameters | undefined =>
+    charge !== 0 ? (individual[speciesId] ?? params) : undefined;
+  const requireCharge = (charge: number) => {
+    if (!Number.isFinite(charge)) throw new ThermoInputError("not-finite", "charge", charge, undefined, `charge must be a finite number (got ${charge})`);
+  };
 
   return {
-    log10Gamma(charge: number, ionicStrengthMolPerKg: number): number {
-      requireMolality("ionicStrengthMolPerKg", ionicStrengthMolPerKg);
-      if (!Number.isFinite(charge)) {
-        throw new ThermoInputError("not-finite", "charge", charge, undefined, `charge must be a finite number (got ${charge})`);
-      }
-      if (charge === 0) return neutralCarriesBDot ? bDot * ionicStrengthMolPerKg : 0;
-      const rootI = Math.sqrt(ionicStrengthMolPerKg);
-      return (-a * charge * charge * rootI) / (1 + ionSizeTerm * rootI) + bDot * ionicStrengthMolPerKg;
+    parameterKey(speciesId: string, charge: number): string {
+      return charge !== 0 && individual[speciesId] ? `id:${speciesId}` : `z:${charge}`;
     },
 
-    lnWaterActivity(totalSoluteMolPerKg: number, chargedSoluteMolPerKg: number, ionicStrengthMolPerKg: number): number {
-      requireMolality("totalSoluteMolPerKg", totalSoluteMolPerKg);
-      requireMolality("chargedSoluteMolPerKg", chargedSoluteMolPerKg);
+    log10Gamma(speciesId: string, charge: number, ionicStrengthMolPerKg: number): number {
       requireMolality("ionicStrengthMolPerKg", ionicStrengthMolPerKg);
-      const bDotMolality = neutralCarriesBDot ? totalSoluteMolPerKg : chargedSoluteMolPerKg;
-      const debyeHuckelTerm = 2 * Math.LN10 * a * debyeHuckelOsmoticIntegral(Math.sqrt(ionicStrengthMolPerKg), ionSizeTerm);
-      const bDotTerm = (Math.LN10 * bDot * bDotMolality * ionicStrengthMolPerKg) / 2;
-      return -waterMolarMassKgPerMol * (totalSoluteMolPerKg - debyeHuckelTerm + bDotTerm);
+      requireCharge(charge);
+      const ion = parametersOf(speciesId, charge);
+      if (!ion) return neutralCarriesBDot ? params.bDotKgPerMol * ionicStrengthMolPerKg : 0;
+      const rootI = Math.sqrt(ionicStrengthMolPerKg);
+      return (-a * charge * charge * rootI) / (1 + b * ion.ionSizeAngstrom * rootI) + ion.bDotKgPerMol * ionicStrengthMolPerKg;
+    },
+
+    waterCoefficient(speciesId: string, charge: number, ionicStrengthMolPerKg: number): number {
+      requireMolality("ionicStrengthMolPerKg", ionicStrengthMolPerKg);
+      requireCharge(charge);
+      const ion = parametersOf(speciesId, charge);
+      if (!ion) return 1 + (neutralCarriesBDot ? (Math.LN10 * params.bDotKgPerMol * ionicStrengthMolPerKg) / 2 : 0);
+      const rootI = Math.sqrt(ionicStrengthMolPerKg);
+      const debyeHuckel = Math.LN10 * a * charge * charge * osmoticIntegralOverIonicStrength(rootI, b * ion.ionSizeAngstrom);
+      return 1 - debyeHuckel + (Math.LN10 * ion.bDotKgPerMol * ionicStrengthMolPerKg) / 2;
     },
   };
 }

@@ -70,8 +70,9 @@ const skipNote = scipyAvailable
 
 /** γ = 1 and the matching ideal-dilute water activity, ln a_w = −M_w Σ m_i (Gibbs–Duhem with γ = 1). */
 const idealDilute: AqueousActivityModel = {
+  parameterKey: () => "ideal",
   log10Gamma: () => 0,
-  lnWaterActivity: (totalSoluteMolPerKg) => -WATER_MOLAR_MASS_KG_PER_MOL * totalSoluteMolPerKg,
+  waterCoefficient: () => 1,
 };
 
 type DualPhase = { id: string; kind: string; slack: number; active: boolean; multiplier: number };

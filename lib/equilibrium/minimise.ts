@@ -94,7 +94,11 @@ export function minimise(p: EquilibriumProblem, options: MinimiseOptions = {}): 
     }
   });
   const retry = run(p, solutionOnly, newtonOptions, options, deadline, started, limitMs);
-  return retry.ok ? { ok: true, value: { ...retry.value, warmStarted: false } } : cold;
+  if (retry.ok) return { ok: true, value: { ...retry.value, warmStarted: false } };
+  // Last, let solids related by water alone coexist with the solution (gypsum + anhydrite in a brine).
+  // Not tried earlier: in hydrated cement the AFm hydrates make such pairs near-degenerate.
+  const withWaterPairs = run(p, cloneState(start.value), newtonOptions, options, deadline, started, limitMs, true);
+  return withWaterPairs.ok ? { ok: true, value: { ...withWaterPairs.value, warmStarted: false } } : cold;
 }
 
 function compatible(p: EquilibriumProblem, s: SolverState): boolean {
@@ -111,6 +115,7 @@ function run(
   deadline: number,
   started: number,
   limitMs: number,
+  allowWaterPairs = false,
 ): EquilibriumOutcome<Omit<MinimiseReport, "warmStarted">> {
   const maxChanges = options.maxPhaseChanges ?? 4 * p.phases.length + 40;
   const blocked = new Uint8Array(p.phases.length);
@@ -224,18 +229,24 @@ function run(
     s.active[best] = 1;
     s.amount[best] = 0;
     if (p.phases[best].kind === "aqueous" && !Number.isFinite(s.lnIonicStrength)) s.lnIonicStrength = Math.log(1e-7);
-    if (isSingular(p, s)) {
+    const regularity = phaseSetRegularity(p, s, true);
+    // Once the search cycles, a solid related to a present one by water alone (gypsum/anhydrite in a
+    // brine) is tried next to it, not swapped: they coexist at the one water activity where they balance.
+    const waterPairAfterCycling = allowWaterPairs && regularity === "dependent" && cycled && phaseSetRegularity(p, s, false) === "regular";
+    if (regularity !== "regular" && !waterPairAfterCycling) {
       // Phase rule: swap with a present phase whose removal restores a regular system.
       let swapped = false;
       for (let q = 0; q < p.phases.length && !swapped; q++) {
         if (q === best || !s.active[q] || p.phases[q].kind === "reservoir" || p.phases[q].kind === "aqueous") continue;
         s.active[q] = 0;
-        if (!isSingular(p, s)) {
+        if (phaseSetRegularity(p, s, true) === "regular") {
           s.amount[q] = 0;
           swapped = true;
         } else s.active[q] = 1;
       }
-      if (!swapped) {
+      // A set that is only ill-conditioned (independent stoichiometry, a small pivot) and has no swap is
+      // tried as it is: the Newton iteration, with its own singularity test, decides.
+      if (!swapped && regularity === "dependent") {
         s.active[best] = 0;
         blocked[best] = BLOCKED_BY_PHASE_RULE;
         lastAdded = -1;
@@ -309,12 +320,14 @@ function activeIds(p: EquilibriumProblem, s: SolverState): string[] {
 
 /**
  * The Gibbs phase rule in its linear-algebra form: the condition vectors of the phases that fix element
- * potentials exactly (pure solids a_k, fixed-pressure gases a_r, and the solvent a_w when the solution is
- * present) must be linearly independent. Hydrates that differ only in water (C4AH13/C4AH19, gypsum/
- * anhydrite) fail this next to an aqueous solution except at one temperature. Checked on the plain
- * stoichiometry, so near-dependence hidden by activity terms is caught too; then the full Newton matrix.
+ * potentials exactly (pure solids a_k, fixed-pressure gases a_r and, with `countSolvent`, the solvent a_w
+ * when the solution is present) must be linearly independent ("dependent" otherwise). Hydrates that differ
+ * only in water (C4AH13/C4AH19, gypsum/anhydrite) fail this next to an aqueous solution, which is right
+ * unless the solutes move a_w to the one value where the pair balances (a brine): hence the option.
+ * Checked on the plain stoichiometry, then on the full Newton matrix: a pivot below the tolerance is
+ * "ill-conditioned" (a nearly dependent set, swapped for a present phase where one can go).
  */
-function isSingular(p: EquilibriumProblem, s: SolverState): boolean {
+function phaseSetRegularity(p: EquilibriumProblem, s: SolverState, countSolvent: boolean): "regular" | "dependent" | "ill-conditioned" {
   const nE = p.elements.length;
   const basis: Float64Array[] = [];
   const addVector = (i: number): boolean => {
@@ -340,13 +353,13 @@ function isSingular(p: EquilibriumProblem, s: SolverState): boolean {
     if (!s.active[k]) continue;
     const kind = p.phases[k].kind;
     if (kind === "pure-solid" || kind === "reservoir") {
-      if (!addVector(p.phases[k].species[0])) return true;
-    } else if (kind === "aqueous" && p.water >= 0) {
-      if (!addVector(p.water)) return true;
+      if (!addVector(p.phases[k].species[0])) return "dependent";
+    } else if (kind === "aqueous" && p.water >= 0 && countSolvent) {
+      if (!addVector(p.water)) return "dependent";
     }
   }
   const a = assemble(p, s);
-  return !solveInPlace(a.matrix, a.rhs, a.size, PHASE_ADDITION_PIVOT_TOLERANCE);
+  return solveInPlace(a.matrix, a.rhs, a.size, PHASE_ADDITION_PIVOT_TOLERANCE) ? "regular" : "ill-conditioned";
 }
 
 /** A typical magnitude of a phase amount, to judge "negative" relative to the system size. */

@@ -226,14 +226,14 @@ describe("thermodynamic heat of hydration: pure phases against calorimetric heat
 describe("thermodynamic heat of hydration: ordinary Portland cement (issue 6 acceptance)", () => {
   // KNOWN DEVIATION (audited 2026-12-01, not tuned). Target: 450–520 J/g for a fully hydrated ordinary Portland
   // cement (Taylor 1997; Lerch & Bogue 1934), and the per-phase sums 481 J/g (Taylor set) and 470 J/g (Lerch &
-  // Bogue set) for this preset. The CEM I preset gives 543.5 J/g at 25 °C. Decomposition, J per g cement: the
-  // increment of each clinker phase averaged over the orders of adding the four phases (increments are not
-  // additive otherwise; 20 of the 24 orders, the aluminate + ferrite-only paste does not converge), with the MgO
-  // held in the clinker (1.8 %, reacting with the clinker) split off at its periclase → brucite heat, 920 J/g:
-  //   alite      303 (552 J/g C3S)   Taylor 284 (517)   excess +19
-  //   belite      50 (293 J/g C2S)   Taylor  45 (262)   excess  +5
-  //   aluminate   91 with the sulfate and calcite it binds;  Taylor 88 (1144, AFm route)  +3
-  //   ferrite     69 (756 J/g C4AF)  Taylor  38 (418)   excess +31
+  // Bogue set) for this preset. The CEM I preset gives 543.5 J/g at 25 °C. Decomposition, J per g cement
+  // (tests/curing/fixtures/heat-decomposition.ts): the increment of each clinker phase averaged over the 24 orders
+  // of adding the four phases (increments are not additive otherwise), with the MgO held in the clinker (1.8 %,
+  // reacting with the clinker) split off at its periclase → brucite heat, 920 J/g:
+  //   alite      304 (553 J/g C3S)   Taylor 284 (517)   excess +20
+  //   belite      50 (295 J/g C2S)   Taylor  45 (262)   excess  +6
+  //   aluminate   90 with the sulfate and calcite it binds;  Taylor 88 (1144, AFm route)  +2
+  //   ferrite     69 (755 J/g C4AF)  Taylor  38 (418)   excess +31
   //   free lime, sulfate dissolution, calcite (no clinker reacted) 14; Taylor CaO 12     +2
   //   MgO         17                 Taylor  15 (841)   excess  +2
   // Half the excess is the ferrite (see the ferrite comment above: the classic ferrite heat is not reproducible

@@ -25,6 +25,13 @@ export class SpeciesAtTemperatureFailure extends Error {
 /** Most temperatures kept per data-set version before the cache is emptied (a sweep rarely needs more). */
 const maximumCachedTemperatures = 512;
 const cache = new Map<string, SpeciesAtTemperatureResult>();
+/**
+ * Engine species of self-contained entries (formation data with a heat capacity) per entry object and T: their G(T)
+ * depends on nothing else, so data sets that share entry objects (the Monte Carlo samples of `sampleDataset` share
+ * every aqueous entry with the data set they come from) evaluate each such entry once per temperature. Entries are
+ * treated as immutable, as everywhere in the data layer; reaction entries are always re-resolved.
+ */
+const entryCache = new WeakMap<LoadedSpecies, Map<number, SpeciesAtTemperature>>();
 
 /**
  * Every data-set entry as the engine's `SpeciesAtTemperature` at T (273.15–373.15 K, 1 bar).
@@ -83,7 +90,9 @@ function compute(dataset: Dataset, temperatureK: number): SpeciesAtTemperatureRe
     const known = gibbs.get(species.id);
     if (known !== undefined) return known;
     let gibbsJPerMol: number;
-    if (species.standard && species.heatCapacity) {
+    const cachedEntry = entryCache.get(species)?.get(temperatureK);
+    if (cachedEntry) gibbsJPerMol = cachedEntry.gibbsJPerMol;
+    else if (species.standard && species.heatCapacity) {
       try {
         gibbsJPerMol = apparentGibbsJPerMol({ standard: species.standard, heatCapacity: species.heatCapacity }, temperatureK);
       } catch (caught) {
@@ -123,9 +132,22 @@ function compute(dataset: Dataset, temperatureK: number): SpeciesAtTemperatureRe
   };
 
   try {
-    const value = dataset.species.map((species) =>
-      Object.freeze(toEngineSpecies(species, resolve(species))),
-    );
+    const value = dataset.species.map((species) => {
+      const selfContained = species.standard !== undefined && species.heatCapacity !== undefined;
+      let byTemperature = selfContained ? entryCache.get(species) : undefined;
+      const known = byTemperature?.get(temperatureK);
+      if (known) {
+        gibbs.set(species.id, known.gibbsJPerMol);
+        return known;
+      }
+      const engineSpecies = Object.freeze(toEngineSpecies(species, resolve(species)));
+      if (selfContained) {
+        if (!byTemperature) entryCache.set(species, (byTemperature = new Map()));
+        if (byTemperature.size >= maximumCachedTemperatures) byTemperature.clear();
+        byTemperature.set(temperatureK, engineSpecies);
+      }
+      return engineSpecies;
+    });
     return { ok: true, value: Object.freeze(value) };
   } catch (caught) {
     if (caught instanceof ResolutionError) return { ok: false, error: caught.detail };

@@ -61,12 +61,13 @@ export function carbonationScenario(
   exposure: ExposureInput,
   options: { points: number; coverMm?: number },
 ): { ok: true; value: CarbonationScenario } | { ok: false; error: SweepFailure } {
-  const start = sweepPaste(base, [0], () => ({}));
+  const start = sweepPaste(base, [0], () => ({}), "carbonation-start");
   if (!start.ok) return start;
   const reacted = base.composition.reactedElementsMol;
   const capacityGuessMol = start.value[0].paste.carbonatableCaMol + ((reacted.Na ?? 0) + (reacted.K ?? 0)) / 2;
   const doses = linearDoses(DOSE_RANGE_MULTIPLE * Math.max(capacityGuessMol, 1e-3), options.points);
-  const swept = sweepPaste(base, doses, (dose) => ({ addedElementsMol: { C: dose, O: 2 * dose } }));
+  // The unexposed paste is the first point's warm start: dose 0 is the same system.
+  const swept = sweepPaste({ ...base, warmFrom: start.value[0].paste }, doses, (dose) => ({ addedElementsMol: { C: dose, O: 2 * dose } }), "carbonation");
   if (!swept.ok) return swept;
   const points: CarbonationPoint[] = swept.value.map(({ dose, paste }) => ({
     ...sweepPoint(dose, paste),

@@ -205,7 +205,7 @@ export function chlorideBinding(
     const magnesiumMol = magnesiumPerChloride * chlorideMol;
     return { addedElementsMol: { Cl: chlorideMol, Mg: magnesiumMol, Na: chlorideMol - 2 * magnesiumMol } };
   };
-  const swept = sweepPaste(sweepBase, doses, addedAt);
+  const swept = sweepPaste(sweepBase, doses, addedAt, "chloride");
   if (!swept.ok) return swept;
 
   const suppressedSet = new Set([...suppressedPhases(base.temperatureC, { enable: base.enable, suppress: suppressedHere })]);
@@ -218,7 +218,7 @@ export function chlorideBinding(
   let coldResolvedPoints = 0;
   for (const entry of solved) {
     if (!(entry.point.maxSaturationIndexOfAbsentSolids > SUPERSATURATION_TOLERANCE)) continue;
-    const cold = sweepPaste(sweepBase, [entry.dose], addedAt);
+    const cold = sweepPaste({ ...sweepBase, warmFrom: undefined, book: undefined }, [entry.dose], addedAt);
     if (!cold.ok) continue;
     const coldPoint = pointOf(entry.dose, cold.value[0].paste);
     if (coldPoint.maxSaturationIndexOfAbsentSolids < entry.point.maxSaturationIndexOfAbsentSolids) {

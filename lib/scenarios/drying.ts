@@ -8,7 +8,7 @@ import { GAS_CONSTANT_J_PER_MOL_K } from "../equilibrium/problem";
 import type { EquilibriumResult } from "../equilibrium/result";
 import { serviceTemperatureRangeC, type ExposureInput } from "../schema/exposure-input";
 import { saturationPressureBar } from "../thermo/water-saturation-pressure";
-import type { ScenarioBase, ScenarioSweep, SweepPoint } from "./sweep";
+import { alkaliBoundFractionOf, bookedPaste, recordPaste, type ScenarioBase, type ScenarioSweep, type SweepPoint } from "./sweep";
 
 /**
  * Drying: the hydration states of the paste's solids at the service relative humidity and temperature — ettringite
@@ -173,6 +173,23 @@ function familySetup(family: HydrationFamily, dataset: Dataset): FamilySetup | u
  * log RH between 1 and 99.5 %; null when the boundary lies outside that range.
  */
 function transitionRhPercent(setup: FamilySetup, boundary: number, temperatureC: number, dataset: Dataset): Outcome<number | null> {
+  // Like the map, a transition depends on the data set alone: each is bisected once per data set (treat as read-only).
+  const key = JSON.stringify([setup.members, boundary, temperatureC]);
+  let known = transitionCache.get(dataset);
+  if (!known) transitionCache.set(dataset, (known = new Map()));
+  const cached = known.get(key);
+  if (cached) return cached;
+  const result = bisectTransitionRhPercent(setup, boundary, temperatureC, dataset);
+  if (known.size >= MAXIMUM_CACHED_TRANSITIONS) known.clear();
+  known.set(key, result);
+  return result;
+}
+
+/** Transitions already bisected, per data set (a cap keeps a long-running service bounded; this module's choice). */
+const transitionCache = new WeakMap<Dataset, Map<string, Outcome<number | null>>>();
+const MAXIMUM_CACHED_TRANSITIONS = 1024;
+
+function bisectTransitionRhPercent(setup: FamilySetup, boundary: number, temperatureC: number, dataset: Dataset): Outcome<number | null> {
   const drierAt = (rh: number): Outcome<boolean> => {
     const index = stableMemberIndex(setup.members, setup.suppressed, setup.elements, temperatureC, rh, dataset);
     return index.ok ? { ok: true, value: index.value >= boundary } : index;
@@ -291,7 +308,7 @@ const molesIn = (phases: readonly { id: string; moles: number }[], id: string) =
 const volumeIn = (phases: readonly { id: string; volumeCm3: number }[], id: string) => phases.find((p) => p.id === id)?.volumeCm3 ?? 0;
 
 /** The dried state of the saturated paste's solids at (T, RH), or the saturated state itself where RH ≥ 99.5 %. */
-function driedState(ctx: SaturatedContext, temperatureC: number, relativeHumidityPercent: number, saturated: boolean, dataset: Dataset): Outcome<DryingState> {
+function driedState(ctx: SaturatedContext, temperatureC: number, relativeHumidityPercent: number, saturated: boolean, dataset: Dataset, withTransitions = true): Outcome<DryingState> {
   const before = ctx.paste.assemblage.phases.filter((p) => p.kind !== "gas").map((p) => ({ id: p.id, moles: p.moles, volumeCm3: p.volumeCm3 }));
   let after = before;
   let waterReleasedMol = 0;
@@ -316,7 +333,7 @@ function driedState(ctx: SaturatedContext, temperatureC: number, relativeHumidit
     const saturatedMember = pick(before);
     const stableMember = pick(after);
     const stableIndex = setup.members.indexOf(stableMember);
-    const next = stableIndex < setup.members.length - 1 ? transitionRhPercent(setup, stableIndex + 1, temperatureC, dataset) : { ok: true as const, value: null };
+    const next = withTransitions && stableIndex < setup.members.length - 1 ? transitionRhPercent(setup, stableIndex + 1, temperatureC, dataset) : { ok: true as const, value: null };
     if (!next.ok) return next;
     families.push({
       family: setup.family.family,
@@ -378,7 +395,16 @@ export function logarithmicHumiditiesPercent(points: number): number[] {
 export function dryingScenario(
   base: ScenarioBase,
   exposure: ExposureInput,
-  options: { points: number; map?: { relativeHumiditiesPercent?: readonly number[]; temperaturesC?: readonly number[] } },
+  options: {
+    points: number;
+    map?: { relativeHumiditiesPercent?: readonly number[]; temperaturesC?: readonly number[] };
+    /**
+     * The reduced path of a Monte Carlo sample: only the service states (the saturated paste and its solids dried at the
+     * service humidity), which decide the flag. The humidity sweep, the map and the transition humidities are left out
+     * (empty, null).
+     */
+    serviceOnly?: boolean;
+  },
 ): Outcome<DryingScenario> {
   if (!Number.isInteger(options.points) || options.points < POINTS_MIN || options.points > POINTS_MAX)
     return { ok: false, error: { code: "invalid_input", field: "points", message: `points must be an integer from ${POINTS_MIN} to ${POINTS_MAX}` } };
@@ -408,15 +434,25 @@ export function dryingScenario(
 
   const contexts = new Map<number, SaturatedContext>();
   for (const temperatureC of temperatures) {
-    const paste = hydratePaste(base.composition, { temperatureC, binderContentKgPerM3: base.binderContentKgPerM3, suppress: base.suppress, enable: base.enable, dataset });
+    const start = bookedPaste(base.book, "drying", temperatureC) ?? base.warmFrom;
+    const paste = hydratePaste(base.composition, {
+      temperatureC,
+      binderContentKgPerM3: base.binderContentKgPerM3,
+      suppress: base.suppress,
+      enable: base.enable,
+      dataset,
+      warmStart: start?.assemblage.state,
+      alkaliBoundFraction: start ? alkaliBoundFractionOf(start, base.composition.reactedElementsMol) : undefined,
+    });
     if (!paste.ok) return paste;
+    recordPaste(base.book, "drying", temperatureC, paste.value);
     contexts.set(temperatureC, saturatedContext(paste.value, dataset, elementsOf));
   }
 
   const service: DryingState[] = [];
   if (serviceRh !== null)
     for (const temperatureC of temperatures) {
-      const state = driedState(contexts.get(temperatureC)!, temperatureC, Math.min(serviceRh, 100), serviceSaturated, dataset);
+      const state = driedState(contexts.get(temperatureC)!, temperatureC, Math.min(serviceRh, 100), serviceSaturated, dataset, !options.serviceOnly);
       if (!state.ok) return state;
       if (state.value.maxSaturationIndexOfAbsentSolids > SUPERSATURATION_TOLERANCE)
         warnings.push(`at ${temperatureC} °C, ${serviceRh} % RH an allowed solid is absent but supersaturated (SI ${state.value.maxSaturationIndexOfAbsentSolids.toFixed(3)}): not a converged equilibrium`);
@@ -426,7 +462,7 @@ export function dryingScenario(
   const hotContext = contexts.get(hottest)!;
   const unreacted = hotContext.paste.phases.filter((p) => p.origin === "unreacted");
   const points: SweepPoint[] = [];
-  for (const rh of logarithmicHumiditiesPercent(options.points)) {
+  for (const rh of options.serviceOnly ? [] : logarithmicHumiditiesPercent(options.points)) {
     const state = driedState({ ...hotContext, families: [] }, hottest, rh, false, dataset);
     if (!state.ok) return state;
     const phaseVolumesCm3: Record<string, number> = {};
@@ -435,13 +471,15 @@ export function dryingScenario(
     points.push({ dose: rh, phaseVolumesCm3, pH: null });
   }
 
-  const map = hydrationStateMaps(options.map?.relativeHumiditiesPercent ?? DEFAULT_MAP_RELATIVE_HUMIDITIES_PERCENT, options.map?.temperaturesC ?? DEFAULT_MAP_TEMPERATURES_C, dataset);
+  const map: Outcome<FamilyMap[]> = options.serviceOnly
+    ? { ok: true, value: [] }
+    : hydrationStateMaps(options.map?.relativeHumiditiesPercent ?? DEFAULT_MAP_RELATIVE_HUMIDITIES_PERCENT, options.map?.temperaturesC ?? DEFAULT_MAP_TEMPERATURES_C, dataset);
   if (!map.ok) return map;
 
   const ettringitePresent = hotContext.families.some((f) => f.members.includes("ettringite"));
   let collapseRh: number | null = null;
   const ettringiteSetup = hotContext.families.find((f) => f.members.includes("ettringite"));
-  if (ettringiteSetup) {
+  if (ettringiteSetup && !options.serviceOnly) {
     const t = transitionRhPercent(ettringiteSetup, ettringiteSetup.members.indexOf("metaettringite"), hottest, dataset);
     if (!t.ok) return t;
     collapseRh = t.value;

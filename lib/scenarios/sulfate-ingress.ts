@@ -77,7 +77,7 @@ export function sulfateIngress(
       },
     };
   };
-  const swept = sweepPaste(base, doses, added);
+  const swept = sweepPaste(base, doses, added, "sulfate");
   if (!swept.ok) return swept;
   const first = swept.value[0].paste;
   const initialSolid = solidVolumeCm3(first);

@@ -2,7 +2,6 @@ import type { BulkComposition } from "../cement/bulk-composition";
 import { hydratePaste, type HydratedPaste } from "../cement/hydrate-paste";
 import type { Dataset } from "../data/load-dataset";
 import type { EquilibriumFailure } from "../equilibrium/failure";
-import type { SerializedState } from "../equilibrium/result";
 
 /** One point of a scenario sweep, in the shape the charts read (`lib/charts/scenario-sweep.ts`). */
 export type SweepPoint = {
@@ -30,7 +29,68 @@ export type ScenarioBase = {
   suppress?: readonly string[];
   enable?: readonly string[];
   dataset?: Dataset;
+  /**
+   * A converged paste of the base composition (at `temperatureC`, or near it): the warm start of the first point of
+   * every chain, so that the scenarios do not each solve the unexposed paste from a cold start.
+   */
+  warmFrom?: HydratedPaste;
+  /** Converged pastes of a reference run, recorded or read point by point (Monte Carlo samples; see `WarmStartBook`). */
+  book?: WarmStartBook;
 };
+
+/**
+ * Converged pastes of a reference run by scenario, chain and point (dose or temperature). In `record` mode every
+ * scenario stores the paste it solved at each point; in `read` mode (a Monte Carlo sample over the same points with a
+ * perturbed data set) each point starts from the reference paste at the same point before its neighbour in the chain:
+ * composition and temperature are the same, only the standard potentials differ by the sampled deviates, so the
+ * phase set rarely changes and Newton needs few iterations. The result is still the minimum of the sample's own
+ * problem (the minimiser checks every phase); only the starting point differs.
+ */
+export type WarmStartBook = {
+  mode: "record" | "read";
+  /** Chain → its points in the order solved. */
+  chains: Map<string, { point: number; paste: HydratedPaste }[]>;
+  /** Figures of the reference run that seed a sample's root finding (e.g. a stability temperature), by name. */
+  figures: Map<string, number>;
+};
+
+export function newWarmStartBook(): WarmStartBook {
+  return { mode: "record", chains: new Map(), figures: new Map() };
+}
+
+/** The same pastes and figures, for reading. */
+export function readingBook(book: WarmStartBook): WarmStartBook {
+  return { ...book, mode: "read" };
+}
+
+/**
+ * The reference paste at this point of this chain, when the book is being read; with `nearest`, the reference paste
+ * of the chain nearest to the point (root finding evaluates a sample at temperatures the reference did not visit).
+ */
+export function bookedPaste(book: WarmStartBook | undefined, chain: string, point: number, nearest = false): HydratedPaste | undefined {
+  if (book?.mode !== "read") return undefined;
+  const entries = book.chains.get(chain);
+  if (!entries) return undefined;
+  let best: { point: number; paste: HydratedPaste } | undefined;
+  for (const entry of entries) {
+    if (entry.point === point) return entry.paste;
+    if (nearest && (!best || Math.abs(entry.point - point) < Math.abs(best.point - point))) best = entry;
+  }
+  return best?.paste;
+}
+
+/** Stores a solved paste when the book is being recorded. */
+export function recordPaste(book: WarmStartBook | undefined, chain: string, point: number, paste: HydratedPaste): void {
+  if (book?.mode !== "record") return;
+  let entries = book.chains.get(chain);
+  if (!entries) book.chains.set(chain, (entries = []));
+  entries.push({ point, paste });
+}
+
+/** Fractions of Na and K a paste holds in C-S-H: the starting guess of the alkali-uptake iteration of a neighbouring solve. */
+export function alkaliBoundFractionOf(paste: HydratedPaste, reactedElementsMol: Record<string, number>): Record<string, number> {
+  return Object.fromEntries(Object.entries(paste.alkaliInCshMol).map(([e, mol]) => [e, reactedElementsMol[e] > 0 ? mol / reactedElementsMol[e] : 0]));
+}
 
 /**
  * The one generic sweep: for each dose, the scenario says how the bulk composition (and temperature)
@@ -42,29 +102,28 @@ export function sweepPaste(
   base: ScenarioBase,
   doses: readonly number[],
   at: (dose: number) => { addedElementsMol?: Record<string, number>; temperatureC?: number; suppress?: readonly string[] },
+  chain = "sweep",
 ): { ok: true; value: { dose: number; paste: HydratedPaste }[] } | { ok: false; error: SweepFailure } {
   const out: { dose: number; paste: HydratedPaste }[] = [];
-  let warmStart: SerializedState | undefined;
-  let alkaliBoundFraction: Record<string, number> | undefined;
+  let previous: HydratedPaste | undefined = base.warmFrom;
   for (const dose of doses) {
     const change = at(dose);
     const reacted = { ...base.composition.reactedElementsMol } as Record<string, number>;
     for (const [element, mol] of Object.entries(change.addedElementsMol ?? {})) reacted[element] = (reacted[element] ?? 0) + mol;
     const composition: BulkComposition = { ...base.composition, reactedElementsMol: reacted as BulkComposition["reactedElementsMol"] };
+    const start = bookedPaste(base.book, chain, dose, true) ?? previous;
     const paste = hydratePaste(composition, {
       temperatureC: change.temperatureC ?? base.temperatureC,
       binderContentKgPerM3: base.binderContentKgPerM3,
       suppress: [...(base.suppress ?? []), ...(change.suppress ?? [])],
       enable: base.enable,
-      warmStart,
-      alkaliBoundFraction,
+      warmStart: start?.assemblage.state,
+      alkaliBoundFraction: start ? alkaliBoundFractionOf(start, reacted) : undefined,
       dataset: base.dataset,
     });
     if (!paste.ok) return { ok: false, error: { ...paste.error, dose } };
-    warmStart = paste.value.assemblage.state;
-    alkaliBoundFraction = Object.fromEntries(
-      Object.entries(paste.value.alkaliInCshMol).map(([e, mol]) => [e, reacted[e] > 0 ? mol / reacted[e] : 0]),
-    );
+    previous = paste.value;
+    recordPaste(base.book, chain, dose, paste.value);
     out.push({ dose, paste: paste.value });
   }
   return { ok: true, value: out };

@@ -4,7 +4,7 @@ import { loadDataset, type Dataset } from "../data/load-dataset";
 import type { EquilibriumFailure } from "../equilibrium/failure";
 import type { SerializedState } from "../equilibrium/result";
 import { serviceTemperatureRangeC, type ExposureInput } from "../schema/exposure-input";
-import { linearDoses, phaseMoles, sweepPoint, type ScenarioBase, type ScenarioSweep, type SweepFailure, type SweepPoint } from "./sweep";
+import { alkaliBoundFractionOf, bookedPaste, linearDoses, phaseMoles, recordPaste, sweepPoint, type ScenarioBase, type ScenarioSweep, type SweepFailure, type SweepPoint } from "./sweep";
 
 /**
  * Temperature history and delayed ettringite formation (DEF). The same bulk composition is equilibrated
@@ -142,6 +142,11 @@ export type TemperatureHistoryOptions = {
   sweepToC?: number;
   toleranceC?: number;
   maxIterations?: number;
+  /**
+   * The reduced path of a Monte Carlo sample read from a `WarmStartBook`: no temperature grid, only the service and
+   * curing states, and the stability temperature by root finding from the reference run's (`stabilityLimitNear`).
+   */
+  reduced?: boolean;
 };
 
 /** ΔrG of precipitation from the saturation index: ΔrG = −RT ln10 · SI, kJ/mol per formula unit. */
@@ -263,15 +268,13 @@ export function supersaturatedSolid(paste: HydratedPaste, base: Pick<ScenarioBas
  * neighbouring paste. When that start fails or leaves an allowed solid supersaturated, the next neighbours (at most
  * three in all) and then a cold start are tried; the result with the least supersaturation is kept.
  */
-export function pasteAtTemperature(base: ScenarioBase, addedElementsMol: Record<string, number>, extraSuppressed: readonly string[]): PasteAt {
+export function pasteAtTemperature(base: ScenarioBase, addedElementsMol: Record<string, number>, extraSuppressed: readonly string[], chain = "temperature"): PasteAt {
   const reacted = { ...base.composition.reactedElementsMol } as Record<string, number>;
   for (const [element, mol] of Object.entries(addedElementsMol)) reacted[element] = (reacted[element] ?? 0) + mol;
   const composition = { ...base.composition, reactedElementsMol: reacted as typeof base.composition.reactedElementsMol };
   const solve = (temperatureC: number, warm?: HydratedPaste) => {
     const warmStart: SerializedState | undefined = warm?.assemblage.state;
-    const alkaliBoundFraction = warm
-      ? Object.fromEntries(Object.entries(warm.alkaliInCshMol).map(([e, mol]) => [e, reacted[e] > 0 ? mol / reacted[e] : 0]))
-      : undefined;
+    const alkaliBoundFraction = warm ? alkaliBoundFractionOf(warm, reacted) : undefined;
     return hydratePaste(composition, {
       temperatureC,
       binderContentKgPerM3: base.binderContentKgPerM3,
@@ -284,7 +287,9 @@ export function pasteAtTemperature(base: ScenarioBase, addedElementsMol: Record<
   };
   return (temperatureC, warm) => {
     const neighbours = warm === undefined ? [] : Array.isArray(warm) ? warm.slice(0, MAX_WARM_STARTS_PER_SOLVE) : [warm as HydratedPaste];
-    const starts: (HydratedPaste | undefined)[] = [...neighbours, undefined];
+    // A Monte Carlo sample first tries the reference run's paste at the same temperature (see `WarmStartBook`).
+    const booked = bookedPaste(base.book, chain, temperatureC, true);
+    const starts: (HydratedPaste | undefined)[] = [...(booked ? [booked] : []), ...neighbours, undefined];
     let best: { value: HydratedPaste; excess: number; attempt: number } | undefined;
     let firstFailure: EquilibriumFailure | undefined;
     for (let attempt = 0; attempt < starts.length; attempt++) {
@@ -298,6 +303,7 @@ export function pasteAtTemperature(base: ScenarioBase, addedElementsMol: Record<
       if (excess === 0) break;
     }
     if (!best) return { ok: false, error: firstFailure! };
+    recordPaste(base.book, chain, temperatureC, best.value);
     return { ok: true, value: best.value, retried: best.attempt > 0 };
   };
 }
@@ -335,6 +341,78 @@ export function phaseStabilityLimit(
   return root.ok
     ? { kind: "found", temperatureC: root.value.temperatureC, iterations: root.value.iterations, bracketC: [present.temperatureC, absent.temperatureC] }
     : { kind: "bracketed", bracketC: [present.temperatureC, absent.temperatureC], failure: `${root.error.code} at ${root.error.temperatureC} °C` };
+}
+
+/** Name of a stability limit in a `WarmStartBook`'s figures. */
+export const stabilityFigure = (chain: string, phaseId: string) => `${chain}:${phaseId}:stability-limit-C`;
+
+/** The point a stability limit gives to root finding from it: the limit itself, or the end of the range it names. */
+export function stabilityHintC(limit: StabilityLimit): number {
+  switch (limit.kind) {
+    case "found":
+      return limit.temperatureC;
+    case "stable-throughout":
+      return limit.upToC;
+    case "absent-throughout":
+      return limit.fromC;
+    case "bracketed":
+      return (limit.bracketC[0] + limit.bracketC[1]) / 2;
+  }
+}
+
+/** Steps away from the hint, °C: 1, 2, 4, … (a cap so nothing hangs; 2^12 °C spans any range of the data set). */
+const FIRST_STEP_C = 1;
+const MAX_STEPS = 12;
+
+/**
+ * The stability limit of a Monte Carlo sample by root finding from the reference run's limit, without a temperature
+ * grid. The function is the one of `stabilityLimitTemperatureC`: f(T) = saturation index of the phase in the assemblage
+ * equilibrated without it (≥ 0: the phase is stable). It is evaluated at the hint, then 1, 2, 4, … °C away from it —
+ * upward while the phase is stable, downward while it is not — until the sign changes, and Brent's method locates the
+ * root in that bracket to the tolerance of the full path. Reaching the top of the range still stable gives
+ * "stable-throughout", the bottom still unstable "absent-throughout" (the phase is taken as stable below its limit, as
+ * ettringite and thaumasite are). Each evaluation starts from the nearest one before it.
+ */
+export function stabilityLimitNear(
+  pasteWithout: PasteAt,
+  phaseId: string,
+  range: { fromC: number; toC: number },
+  hintC: number,
+  toleranceC: number,
+  maxIterations: number,
+): StabilityLimit {
+  const evaluated: HydratedPaste[] = [];
+  const f = (t: number): { ok: true; value: number } | { ok: false; error: EquilibriumFailure & { temperatureC: number } } => {
+    const paste = pasteWithout(t, byDistance(evaluated.map((p) => ({ paste: p })), t));
+    if (!paste.ok) return { ok: false, error: { ...paste.error, temperatureC: t } };
+    evaluated.push(paste.value);
+    return { ok: true, value: paste.value.assemblage.saturationIndices[phaseId] ?? Number.NEGATIVE_INFINITY };
+  };
+  const failed = (error: { code: string; temperatureC: number }, bracketC: [number, number]): StabilityLimit => ({ kind: "bracketed", bracketC, failure: `${error.code} at ${error.temperatureC} °C` });
+  let inner = Math.min(range.toC, Math.max(range.fromC, hintC));
+  const first = f(inner);
+  if (!first.ok) return failed(first.error, [range.fromC, range.toC]);
+  let innerValue = first.value;
+  const stableAtHint = innerValue >= 0;
+  let step = FIRST_STEP_C;
+  for (let i = 0; i < MAX_STEPS; i++) {
+    const t = stableAtHint ? Math.min(range.toC, inner + step) : Math.max(range.fromC, inner - step);
+    if (t === inner) return stableAtHint ? { kind: "stable-throughout", upToC: range.toC } : { kind: "absent-throughout", fromC: range.fromC, toC: range.toC };
+    const next = f(t);
+    if (!next.ok) return failed(next.error, stableAtHint ? [inner, t] : [t, inner]);
+    if (next.value >= 0 !== stableAtHint) {
+      const present = stableAtHint ? { t: inner, v: innerValue } : { t, v: next.value };
+      const absent = stableAtHint ? { t, v: next.value } : { t: inner, v: innerValue };
+      const bracketC: [number, number] = [present.t, absent.t];
+      const root = brentRoot(f, { a: present.t, b: absent.t, fa: Math.max(present.v, 0), fb: Math.min(absent.v, 0) }, toleranceC, maxIterations);
+      if (!root.ok) return "temperatureC" in root.error ? failed(root.error, bracketC) : { kind: "bracketed", bracketC, failure: "no sign change" };
+      return { kind: "found", temperatureC: root.value.x, iterations: root.value.iterations, bracketC };
+    }
+    inner = t;
+    innerValue = next.value;
+    step *= 2;
+  }
+  return { kind: "bracketed", bracketC: [range.fromC, range.toC], failure: "no sign change within the step cap" };
 }
 
 export function stabilityLimitTemperatureC(
@@ -447,19 +525,21 @@ export function temperatureHistory(
   }
   const withData: ScenarioBase = { ...base, dataset };
   const grid = linearDoses(toC - fromC, options.points).map((d) => fromC + d);
-  const temperatures = [...new Set([...grid, serviceC, ...(curingC === undefined ? [] : [curingC])])].sort((a, b) => a - b);
+  const reduced = options.reduced === true && base.book?.mode === "read";
+  const temperatures = [...new Set([...(reduced ? [] : grid), serviceC, ...(curingC === undefined ? [] : [curingC])])].sort((a, b) => a - b);
   // The chain of warm-started equilibria, each checked: a warm start that leaves an allowed solid supersaturated
   // is re-solved cold (see `pasteAtTemperature`), so a non-equilibrium state is never carried to the next point.
   // (The generic `sweepPaste` warm-starts without this check; along this temperature path it carried such a state
   // from the monosulfate hydrate transition near 28 °C to 95 °C.)
-  const plain = pasteAtTemperature(withData, {}, []);
+  const plain = pasteAtTemperature(withData, {}, [], "temperature");
   const retriedAtC: number[] = [];
   const remainingSupersaturation: { temperatureC: number; phaseId: string; saturationIndex: number }[] = [];
   const points: { dose: number; paste: HydratedPaste }[] = [];
   const failedAtC: { temperatureC: number; code: string }[] = [];
   const essential = new Set([serviceC, ...(curingC === undefined ? [] : [curingC])]);
+  const chainStart = withData.warmFrom ? [withData.warmFrom] : [];
   for (const t of temperatures) {
-    const solved = plain(t, recent(points));
+    const solved = plain(t, points.length > 0 ? recent(points) : chainStart);
     if (!solved.ok) {
       // A chart point the engine cannot solve (warm and cold) is left out and recorded; the service and curing states are required.
       if (essential.has(t)) return { ok: false, error: { ...solved.error, dose: t } };
@@ -479,10 +559,16 @@ export function temperatureHistory(
     dissolvedSulfateMolSO3: dissolvedSulfate(paste),
   }));
 
-  const withoutEttringite = pasteAtTemperature(withData, {}, ["ettringite"]);
+  const withoutEttringite = pasteAtTemperature(withData, {}, ["ettringite"], "temperature-without-ettringite");
   const tolerance = options.toleranceC ?? DEFAULT_TOLERANCE_C;
   const maxIterations = options.maxIterations ?? DEFAULT_MAX_ITERATIONS;
-  const stabilityLimit = phaseStabilityLimit(points, "ettringite", withoutEttringite, tolerance, maxIterations);
+  const figure = stabilityFigure("temperature", "ettringite");
+  const hintC = base.book?.figures.get(figure);
+  const stabilityLimit =
+    reduced && hintC !== undefined
+      ? stabilityLimitNear(withoutEttringite, "ettringite", { fromC, toC }, hintC, tolerance, maxIterations)
+      : phaseStabilityLimit(points, "ettringite", withoutEttringite, tolerance, maxIterations);
+  if (base.book?.mode === "record") base.book.figures.set(figure, stabilityHintC(stabilityLimit));
 
   const at = (t: number) => points.find((p) => p.dose === t)!.paste;
   const stateAt = (t: number): { ok: true; value: TemperatureState } | { ok: false; error: TemperatureHistoryError } => {

@@ -3,7 +3,7 @@ import type { HydratedPaste } from "../cement/hydrate-paste";
 import { loadDataset } from "../data/load-dataset";
 import { serviceTemperatureRangeC, type ExposureInput } from "../schema/exposure-input";
 import { linearDoses, phaseMoles, sweepPoint, type ScenarioBase, type ScenarioSweep, type SweepFailure, type SweepPoint } from "./sweep";
-import { byDistance, formationGibbsKJPerMol, pasteAtTemperature, recent, phaseStabilityLimit, supersaturatedSolid, DATA_SET_MAX_C, DATA_SET_MIN_C, DEFAULT_MAX_ITERATIONS, DEFAULT_TOLERANCE_C, type EquilibriumChecks, type StabilityLimit } from "./temperature-history";
+import { byDistance, formationGibbsKJPerMol, pasteAtTemperature, recent, phaseStabilityLimit, stabilityFigure, stabilityHintC, stabilityLimitNear, supersaturatedSolid, DATA_SET_MAX_C, DATA_SET_MIN_C, DEFAULT_MAX_ITERATIONS, DEFAULT_TOLERANCE_C, type EquilibriumChecks, type StabilityLimit } from "./temperature-history";
 
 /**
  * Thaumasite, Ca6Si2(SO4)2(CO3)2(OH)12·24H2O: the C-S-H of the paste reacts with sulfate and carbonate and loses
@@ -114,6 +114,8 @@ export type ThaumasiteOptions = {
   carbonateAggregateCalciteGPer100g?: number;
   toleranceC?: number;
   maxIterations?: number;
+  /** The reduced path of a Monte Carlo sample read from a `WarmStartBook`: the service state only, and the stability temperature by root finding from the reference run's. */
+  reduced?: boolean;
 };
 
 function add(to: Record<string, number>, elements: Record<string, number>, times: number) {
@@ -209,15 +211,17 @@ export function thaumasite(
   add(added, { Ca: 1, C: 1, O: 3 }, aggregateCalciteMol);
 
   const grid = linearDoses(toC - fromC, options.points).map((d) => fromC + d);
-  const temperatures = [...new Set([...grid, serviceC])].sort((a, b) => a - b);
-  const solve = pasteAtTemperature(withData, added, []);
+  const reduced = options.reduced === true && base.book?.mode === "read";
+  const temperatures = [...new Set([...(reduced ? [] : grid), serviceC])].sort((a, b) => a - b);
+  const solve = pasteAtTemperature(withData, added, [], "thaumasite");
   const retriedAtC: number[] = [];
   const remainingSupersaturation: { temperatureC: number; phaseId: string; saturationIndex: number }[] = [];
   const points: { dose: number; paste: HydratedPaste }[] = [];
   // Start the chain from the paste without the exposure at the first temperature: a neighbouring state from which
   // the warm start reaches the dosed equilibrium more reliably than a cold start does (each result is checked anyway).
-  const undosed = pasteAtTemperature(withData, {}, [])(temperatures[0]);
-  const undosedStart = undosed.ok ? [undosed.value] : [];
+  // (A sample starts from the reference run's dosed pastes instead.)
+  const undosed = reduced ? undefined : pasteAtTemperature(withData, {}, [], "thaumasite-undosed")(temperatures[0], withData.warmFrom ? [withData.warmFrom] : undefined);
+  const undosedStart = undosed?.ok ? [undosed.value] : [];
   const failedAtC: { temperatureC: number; code: string }[] = [];
   for (const t of temperatures) {
     const solved = solve(t, recent(points, undosedStart));
@@ -233,8 +237,16 @@ export function thaumasite(
     points.push({ dose: t, paste: solved.value });
   }
 
-  const withoutThaumasite = pasteAtTemperature(withData, added, ["thaumasite"]);
-  const stabilityLimit = phaseStabilityLimit(points, "thaumasite", withoutThaumasite, options.toleranceC ?? DEFAULT_TOLERANCE_C, options.maxIterations ?? DEFAULT_MAX_ITERATIONS);
+  const withoutThaumasite = pasteAtTemperature(withData, added, ["thaumasite"], "thaumasite-without-thaumasite");
+  const figure = stabilityFigure("thaumasite", "thaumasite");
+  const hintC = base.book?.figures.get(figure);
+  const tolerance = options.toleranceC ?? DEFAULT_TOLERANCE_C;
+  const maxIterations = options.maxIterations ?? DEFAULT_MAX_ITERATIONS;
+  const stabilityLimit =
+    reduced && hintC !== undefined
+      ? stabilityLimitNear(withoutThaumasite, "thaumasite", { fromC, toC }, hintC, tolerance, maxIterations)
+      : phaseStabilityLimit(points, "thaumasite", withoutThaumasite, tolerance, maxIterations);
+  if (base.book?.mode === "record") base.book.figures.set(figure, stabilityHintC(stabilityLimit));
 
   const service = points.find((p) => p.dose === serviceC)!.paste;
   const serviceWithout = withoutThaumasite(serviceC, byDistance(points, serviceC));

@@ -25,7 +25,7 @@ import { delayedEttringiteFormationFlag } from "../advisory/flag-rules/delayed-e
 import { ettringiteDehydrationFlag } from "../advisory/flag-rules/ettringite-dehydration";
 import { thaumasiteFormationFlag } from "../advisory/flag-rules/thaumasite-formation";
 import { sulfateIngress, type SulfateScenario } from "../scenarios/sulfate-ingress";
-import type { ScenarioBase } from "../scenarios/sweep";
+import { alkaliBoundFractionOf, bookedPaste, newWarmStartBook, readingBook, recordPaste, type ScenarioBase, type WarmStartBook } from "../scenarios/sweep";
 import { assessInput, binderInputOf, type AssessInput } from "../schema/assess-input";
 import { formatIssues } from "../schema/format-issues";
 import { domainError, validationError, type ServiceOutcome } from "./outcome";
@@ -73,8 +73,22 @@ const MONTE_CARLO_SWEEP_POINTS = 8;
 
 type Deterministic = Omit<AssessmentResult, "inputs" | "uncertainty" | "cautions" | "versions">;
 
+type AssessOptions = {
+  points: number;
+  withTimeline: boolean;
+  /** Warm starts recorded by a reference run, or read by a Monte Carlo sample (`WarmStartBook`). */
+  book?: WarmStartBook;
+  /**
+   * The Monte Carlo path: drying at the service conditions only (`dryingScenario`'s `serviceOnly`), and, when the book
+   * is read, the temperature and thaumasite scenarios reduced to their service/curing states with the stability
+   * temperatures found by root finding from the reference run's.
+   */
+  reduced?: boolean;
+};
+
 /** Everything for one data set: the base assemblage, the scenarios and their flags. */
-function assessWithDataset(input: AssessInput, dataset: Dataset, points: number, withTimeline: boolean): ServiceOutcome<Deterministic> {
+function assessWithDataset(input: AssessInput, dataset: Dataset, options: AssessOptions): ServiceOutcome<Deterministic> {
+  const { points, withTimeline, book } = options;
   const system = binderSystemFromInput(binderInputOf(input));
   if (!system.ok) {
     const error = system.error;
@@ -83,8 +97,11 @@ function assessWithDataset(input: AssessInput, dataset: Dataset, points: number,
   }
   const temperatureC = input.age.mode === "age" ? input.age.curingTemperatureC : 20;
   const overrides = { suppress: input.options.suppressedPhases, enable: input.options.allowedPhases, dataset };
-  const paste = hydratePaste(system.value.composition, { temperatureC, binderContentKgPerM3: input.mix.binderContentKgPerM3, ...overrides });
+  const reacted = system.value.composition.reactedElementsMol;
+  const warmFrom = (start: HydratedPaste | undefined) => (start ? { warmStart: start.assemblage.state, alkaliBoundFraction: alkaliBoundFractionOf(start, reacted) } : {});
+  const paste = hydratePaste(system.value.composition, { temperatureC, binderContentKgPerM3: input.mix.binderContentKgPerM3, ...overrides, ...warmFrom(bookedPaste(book, "base", temperatureC)) });
   if (!paste.ok) return domainError(paste.error.code, describeFailure(paste.error));
+  recordPaste(book, "base", temperatureC, paste.value);
   let timeline: TimelineEntry[] = [];
   if (withTimeline) {
     const series = hydrationTimeline(system.value.binder, { temperatureC, points, firstAgeDays: 1 / 24, lastAgeDays: 3650, ...overrides });
@@ -94,13 +111,25 @@ function assessWithDataset(input: AssessInput, dataset: Dataset, points: number,
   const exposure = input.exposure;
   const serviceTemperatureC =
     typeof exposure.serviceTemperatureC === "number" ? exposure.serviceTemperatureC : exposure.serviceTemperatureC ? (exposure.serviceTemperatureC.minC + exposure.serviceTemperatureC.maxC) / 2 : 20;
+  const scenarioTemperatureC = Math.min(100, Math.max(0, serviceTemperatureC));
+  // The unexposed paste at the service temperature, solved once (from the base paste) as every scenario's first warm
+  // start; when it cannot be solved the scenarios start cold and report their own failure.
+  const service = hydratePaste(system.value.composition, {
+    temperatureC: scenarioTemperatureC,
+    binderContentKgPerM3: input.mix.binderContentKgPerM3,
+    ...overrides,
+    ...warmFrom(bookedPaste(book, "service", scenarioTemperatureC) ?? paste.value),
+  });
+  if (service.ok) recordPaste(book, "service", scenarioTemperatureC, service.value);
   const base: ScenarioBase = {
     composition: system.value.composition,
-    temperatureC: Math.min(100, Math.max(0, serviceTemperatureC)),
+    temperatureC: scenarioTemperatureC,
     binderContentKgPerM3: input.mix.binderContentKgPerM3,
     suppress: input.options.suppressedPhases,
     enable: input.options.allowedPhases,
     dataset,
+    warmFrom: service.ok ? service.value : undefined,
+    book,
   };
   const scenarios: AssessmentScenarios = {};
   const scenarioErrors: AssessmentResult["scenarioErrors"] = {};
@@ -133,7 +162,7 @@ function assessWithDataset(input: AssessInput, dataset: Dataset, points: number,
   }
   const curingMaxTemperatureC = curing ? Math.max(curing.temperature.peakCoreC, input.curing.maxTemperatureC ?? -Infinity) : input.curing.maxTemperatureC;
   const scenarioContext = { ...context, curingMaxTemperatureC };
-  const temperature = temperatureHistory(base, exposure, { points, curingMaxTemperatureC });
+  const temperature = temperatureHistory(base, exposure, { points, curingMaxTemperatureC, reduced: options.reduced });
   if (!temperature.ok) scenarioErrors.temperature = { code: temperature.error.code, message: temperature.error.message };
   else {
     scenarios.temperature = temperature.value;
@@ -141,7 +170,7 @@ function assessWithDataset(input: AssessInput, dataset: Dataset, points: number,
     if (def) flags.push(def);
   }
 
-  const thaumasiteResult = thaumasite(base, exposure, { points: Math.max(5, Math.round(points / 2)) });
+  const thaumasiteResult = thaumasite(base, exposure, { points: Math.max(5, Math.round(points / 2)), reduced: options.reduced });
   if (!thaumasiteResult.ok) scenarioErrors.thaumasite = { code: thaumasiteResult.error.code, message: thaumasiteResult.error.message };
   else {
     scenarios.thaumasite = thaumasiteResult.value;
@@ -159,7 +188,7 @@ function assessWithDataset(input: AssessInput, dataset: Dataset, points: number,
     }
   }
   if (exposure.relativeHumidityPercent !== undefined) {
-    const drying = dryingScenario(base, exposure, { points });
+    const drying = dryingScenario(base, exposure, { points, serviceOnly: options.reduced });
     if (!drying.ok) scenarioErrors.drying = { code: drying.error.code, message: drying.error.message };
     else {
       scenarios.drying = drying.value;
@@ -211,7 +240,7 @@ export async function runAssessment(
     const index = input.options[field].findIndex((id) => !known.has(id));
     if (index >= 0) return validationError([{ path: `options.${field}.${index}`, message: `unknown phase id "${input.options[field][index]}"` }]);
   }
-  const deterministic = assessWithDataset(input, loaded.value, input.options.sweepPoints, true);
+  const deterministic = assessWithDataset(input, loaded.value, { points: input.options.sweepPoints, withTimeline: true });
   if (!deterministic.ok) return deterministic;
   const result: AssessmentResult = {
     inputs: input,
@@ -225,10 +254,16 @@ export async function runAssessment(
     const volumes: Record<string, number[]> = {};
     const fired: Record<string, boolean[]> = {};
     let failed = 0;
+    // The samples' path: the scenarios at MONTE_CARLO_SWEEP_POINTS points with drying at the service conditions only,
+    // first run once with the data set as it is to record a warm start at every point; each sample then starts every
+    // equilibrium from the reference at the same point (same composition and temperature, perturbed potentials).
+    const book = newWarmStartBook();
+    const reference = assessWithDataset(input, loaded.value, { points: MONTE_CARLO_SWEEP_POINTS, withTimeline: false, book, reduced: true });
+    const reading = reference.ok ? readingBook(book) : undefined;
     for (let i = 0; i < samples; i++) {
       if (options.signal?.aborted) return domainError("cancelled", `cancelled after ${i} of ${samples} samples`, { completedSamples: i });
       const sampled = sampleDataset(loaded.value, createRng(seed, i));
-      const run = assessWithDataset(input, sampled, MONTE_CARLO_SWEEP_POINTS, false);
+      const run = assessWithDataset(input, sampled, { points: MONTE_CARLO_SWEEP_POINTS, withTimeline: false, book: reading, reduced: true });
       if (!run.ok) {
         failed++;
         continue;

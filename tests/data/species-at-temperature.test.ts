@@ -103,3 +103,21 @@ describe("speciesAtTemperature", () => {
     }
   });
 });
+
+describe("entries shared between data sets (Monte Carlo samples)", () => {
+  it("give the same potentials as copies that share nothing, and a changed entry its own", () => {
+    const calcite = dataset.species.find((s) => s.id === "calcite" && s.standard)!;
+    const shiftJPerMol = 1000;
+    const shared: Dataset = {
+      ...dataset,
+      species: dataset.species.map((s) => (s === calcite ? { ...s, standard: { ...s.standard!, gibbsJPerMol: s.standard!.gibbsJPerMol + shiftJPerMol } } : s)),
+      version: `${dataset.version}-shared-test`,
+    };
+    const copies: Dataset = { ...shared, species: structuredClone(shared.species), version: `${dataset.version}-copied-test` };
+    const t = 333.15;
+    const [a, b, plain] = [gibbsAt(shared, t), gibbsAt(copies, t), gibbsAt(dataset, t)];
+    for (const [id, g] of b) expect(a.get(id), id).toBe(g);
+    // A shift of G at 25 °C passes unchanged to every temperature for a formation-data entry (G(T) = ΔfG°(Tr) − ∫S dT).
+    expect(a.get("calcite")! - plain.get("calcite")!).toBeCloseTo(shiftJPerMol, 6);
+  });
+});

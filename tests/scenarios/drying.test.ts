@@ -147,3 +147,20 @@ describe("bad options", () => {
     if (!r.ok) expect(r.error).toMatchObject({ code: "invalid_input", field: "points" });
   });
 });
+
+describe("the Monte Carlo path (service conditions only)", () => {
+  it("gives the same service states as the full scenario and leaves out the humidity sweep, the map and the transition humidities", () => {
+    const raw = { relativeHumidityPercent: 3, serviceTemperatureC: 60, wetting: "wet-dry" };
+    const full = run(raw);
+    const r = dryingScenario(base, exposureInput.parse(raw), { points: 8, map: smallMap, serviceOnly: true });
+    if (!r.ok) throw new Error(JSON.stringify(r.error));
+    const reduced = r.value;
+    expect(reduced.sweep.points).toEqual([]);
+    expect(reduced.rhTemperatureMaps).toEqual([]);
+    expect(reduced.summary.ettringiteCollapseBelowRhPercent).toBeNull();
+    expect(reduced.summary.ettringiteCollapsed).toBe(full.summary.ettringiteCollapsed);
+    expect(reduced.summary.stableMembers).toEqual(full.summary.stableMembers);
+    expect(reduced.summary.ettringiteDehydrationGibbsKJPerMol!).toBeCloseTo(full.summary.ettringiteDehydrationGibbsKJPerMol!, 6);
+    expect(reduced.service.map((s) => s.families.map((f) => f.nextTransitionBelowRhPercent))).toEqual(full.service.map((s) => s.families.map(() => null)));
+  });
+});

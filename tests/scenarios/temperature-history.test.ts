@@ -3,8 +3,8 @@ import { binderSystemFromInput } from "../../lib/cement/binder-system";
 import { hydratePaste } from "../../lib/cement/hydrate-paste";
 import { loadDataset } from "../../lib/data/load-dataset";
 import { parseExposureInput } from "../../lib/schema/exposure-input";
-import { brentRoot, formationGibbsKJPerMol, temperatureHistory } from "../../lib/scenarios/temperature-history";
-import { phaseMoles, type ScenarioBase } from "../../lib/scenarios/sweep";
+import { brentRoot, DEFAULT_MAX_ITERATIONS, DEFAULT_TOLERANCE_C, formationGibbsKJPerMol, pasteAtTemperature, stabilityLimitNear, temperatureHistory } from "../../lib/scenarios/temperature-history";
+import { newWarmStartBook, phaseMoles, readingBook, type ScenarioBase } from "../../lib/scenarios/sweep";
 
 /** The base paste of the scenario brief: typical CEM I preset, w/b 0.5, 350 kg/m³, 28 days at 20 °C (typical, not a specific cement). */
 function basePaste(): ScenarioBase {
@@ -174,5 +174,43 @@ describe("bad input", () => {
   it("refuses a sweep whose end is not above its start", () => {
     const r = temperatureHistory(base, exposure(), { points: 4, sweepFromC: 50, sweepToC: 40 });
     expect(r.ok).toBe(false);
+  });
+});
+
+describe("the Monte Carlo path: the stability temperature by root finding from the reference run's", () => {
+  const book = newWarmStartBook();
+  const reference = temperatureHistory({ ...base, book }, exposure(), { points: 12, curingMaxTemperatureC: 85 });
+  if (!reference.ok) throw new Error(JSON.stringify(reference.error));
+  const tolerance = DEFAULT_TOLERANCE_C;
+
+  it("finds, on the same data, the limit the temperature grid brackets (like with like: only the search differs), to the root-finding tolerance", () => {
+    const sample = temperatureHistory({ ...base, book: readingBook(book) }, exposure(), { points: 12, curingMaxTemperatureC: 85, reduced: true });
+    if (!sample.ok) throw new Error(JSON.stringify(sample.error));
+    const [a, b] = [reference.value.summary.stabilityLimit, sample.value.summary.stabilityLimit];
+    expect(a.kind).toBe("found");
+    expect(b.kind).toBe("found");
+    if (a.kind !== "found" || b.kind !== "found") return;
+    expect(Math.abs(a.temperatureC - b.temperatureC)).toBeLessThan(2 * tolerance);
+    // The reduced path solves the service and curing states only, and they agree with the full path's.
+    expect(sample.value.sweep.points.map((p) => p.dose)).toEqual([20, 85]);
+    expect(sample.value.summary.atCuring!.ettringiteMol).toBeCloseTo(reference.value.summary.atCuring!.ettringiteMol, 8);
+    expect(sample.value.summary.atService.ettringiteSaturationIndexWithoutIt).toBeCloseTo(reference.value.summary.atService.ettringiteSaturationIndexWithoutIt, 6);
+  });
+
+  const pasteWithout = pasteAtTemperature(base, {}, ["ettringite"]);
+  const found = reference.value.summary.stabilityLimit;
+  it.each([
+    ["20 °C below", -20],
+    ["7 °C above", 7],
+  ])("walks out from a hint %s the limit and finds the same root", (_label, offsetC) => {
+    if (found.kind !== "found") throw new Error("reference limit not found");
+    const near = stabilityLimitNear(pasteWithout, "ettringite", { fromC: 5, toC: 95 }, found.temperatureC + offsetC, tolerance, DEFAULT_MAX_ITERATIONS);
+    expect(near.kind).toBe("found");
+    if (near.kind === "found") expect(Math.abs(near.temperatureC - found.temperatureC)).toBeLessThan(2 * tolerance);
+  });
+
+  it("reports stable throughout when the phase is still stable at the top of the range", () => {
+    if (found.kind !== "found") throw new Error("reference limit not found");
+    expect(stabilityLimitNear(pasteWithout, "ettringite", { fromC: 5, toC: found.temperatureC - 3 }, 40, tolerance, DEFAULT_MAX_ITERATIONS)).toEqual({ kind: "stable-throughout", upToC: found.temperatureC - 3 });
   });
 });

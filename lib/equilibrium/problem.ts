@@ -80,7 +80,8 @@ const isHydron = (s: SpeciesAtTemperature) =>
 export function buildProblem(input: ProblemInput): EquilibriumOutcome<EquilibriumProblem> {
   const rt = GAS_CONSTANT_J_PER_MOL_K * input.temperatureK;
   const fixed = input.fixedPartialPressuresBar ?? {};
-  const byId = new Map(input.species.map((s) => [s.id, s]));
+  // The id index is needed only for fixed-pressure gases (most calls have none).
+  const byId = Object.keys(fixed).length > 0 ? new Map(input.species.map((s) => [s.id, s])) : new Map<string, SpeciesAtTemperature>();
   for (const [gasId, pressureBar] of Object.entries(fixed)) {
     const gas = byId.get(gasId);
     if (!gas || gas.phase !== "gas")
@@ -88,7 +89,7 @@ export function buildProblem(input: ProblemInput): EquilibriumOutcome<Equilibriu
     if (!(pressureBar > 0))
       return { ok: false, error: { code: "invalid_input", field: `fixedPartialPressuresBar.${gasId}`, message: "must be greater than 0 bar" } };
   }
-  const waterVapourFixed = input.species.some((s) => s.id in fixed && s.phase === "gas" && s.charge === 0 && s.elements.H === 2 && s.elements.O === 1 && Object.keys(s.elements).length === 2);
+  const waterVapourFixed = byId.size > 0 && input.species.some((s) => s.id in fixed && s.phase === "gas" && s.charge === 0 && s.elements.H === 2 && s.elements.O === 1 && Object.keys(s.elements).length === 2);
 
   const available = new Set<string>();
   let largestTotal = 0;
@@ -104,7 +105,6 @@ export function buildProblem(input: ProblemInput): EquilibriumOutcome<Equilibriu
 
   const suppressedList = [...(input.suppressedPhases ?? [])].sort();
   const key = [
-    input.temperatureK,
     [...available].sort().join(","),
     Object.entries(fixed).sort().map(([k, v]) => `${k}=${v}`).join(","),
     suppressedList.join(","),
@@ -117,9 +117,18 @@ export function buildProblem(input: ProblemInput): EquilibriumOutcome<Equilibriu
   }
   let template = templates.get(key);
   if (!template) {
-    const built = buildTemplate(input, available, fixed, waterVapourFixed);
-    if (!built.ok) return built;
-    template = built.value;
+    // The same species list at another temperature (or a Monte Carlo sample of it) has the same structure: reuse it
+    // and evaluate only μ°/RT.
+    const structureKey = `${speciesStructure(input.species)}#${key}`;
+    const structure = structureCache.get(structureKey);
+    if (structure) template = atTemperature(structure, input);
+    else {
+      const built = buildTemplate(input, available, fixed, waterVapourFixed);
+      if (!built.ok) return built;
+      template = built.value;
+      if (structureCache.size > 256) structureCache.clear();
+      structureCache.set(structureKey, template);
+    }
     if (templates.size > 256) templates.clear();
     templates.set(key, template);
   }
@@ -164,10 +173,35 @@ type ProblemTemplate = {
   fullChargeRow: number;
   keep: number[];
   dependent: { column: number; coefficients: Float64Array }[];
+  /** Per problem species, its index in the input list and the constant added to G/RT (ln p of a reservoir, ln P of a gas). */
+  inputIndex: Int32Array;
+  gOffset: Float64Array;
 };
 
 /** Structural part of a problem (species, phases, reduced stoichiometry), reused while only totals change. */
 const templateCache = new WeakMap<readonly SpeciesAtTemperature[], Map<string, ProblemTemplate>>();
+/** Templates by species structure (everything but G) and key: shared by the temperatures and samples of one data set. */
+const structureCache = new Map<string, ProblemTemplate>();
+const structureOf = new WeakMap<readonly SpeciesAtTemperature[], string>();
+
+/** A string that is equal for two species lists exactly when they differ at most in their Gibbs energies. */
+function speciesStructure(species: readonly SpeciesAtTemperature[]): string {
+  let signature = structureOf.get(species);
+  if (signature === undefined) {
+    signature = species
+      .map((s) => `${s.id};${s.phase};${s.solution ?? ""};${s.charge};${Object.entries(s.elements).map(([e, n]) => `${e}${n}`).join(",")};${s.molarMassGPerMol};${s.molarVolumeCm3PerMol ?? ""}`)
+      .join("\n");
+    structureOf.set(species, signature);
+  }
+  return signature;
+}
+
+/** A structural template with the μ°/RT of another species list of the same structure, at its temperature. */
+function atTemperature(template: ProblemTemplate, input: ProblemInput): ProblemTemplate {
+  const rt = GAS_CONSTANT_J_PER_MOL_K * input.temperatureK;
+  const species = template.problem.species.map((sp, i) => ({ ...sp, g: input.species[template.inputIndex[i]].gibbsJPerMol / rt + template.gOffset[i] }));
+  return { ...template, problem: { ...template.problem, temperatureK: input.temperatureK, species } };
+}
 
 function buildTemplate(
   input: ProblemInput,
@@ -176,9 +210,13 @@ function buildTemplate(
   waterVapourFixed: boolean,
 ): EquilibriumOutcome<ProblemTemplate> {
   const rt = GAS_CONSTANT_J_PER_MOL_K * input.temperatureK;
-  const kept = input.species.filter(
-    (s) => Object.keys(s.elements).every((e) => available.has(e)) && !(waterVapourFixed && s.phase === "aqueous"),
-  );
+  const inputIndices: number[] = [];
+  const kept = input.species.filter((s, index) => {
+    const keepIt = Object.keys(s.elements).every((e) => available.has(e)) && !(waterVapourFixed && s.phase === "aqueous");
+    if (keepIt) inputIndices.push(index);
+    return keepIt;
+  });
+  const gOffset = new Float64Array(kept.length);
   const elementSet = new Set<string>();
   for (const s of kept) for (const [e, v] of Object.entries(s.elements)) if (v !== 0) elementSet.add(e);
   for (const element of available) {
@@ -210,16 +248,16 @@ function buildTemplate(
   let hydron = -1;
   kept.forEach((s, i) => {
     let phase: number;
-    let g = s.gibbsJPerMol / rt;
     if (s.id in fixed) {
       phase = phaseFor(s.id, "reservoir");
-      g += Math.log(fixed[s.id]);
+      gOffset[i] = Math.log(fixed[s.id]);
     } else if (s.phase === "aqueous") phase = phaseFor("aqueous", "aqueous");
     else if (s.phase === "gas") {
       phase = phaseFor("gas", "gas");
-      g += lnTotalPressure;
+      gOffset[i] = lnTotalPressure;
     } else if (s.solution) phase = phaseFor(s.solution, "solid-solution");
     else phase = phaseFor(s.id, "pure-solid");
+    const g = s.gibbsJPerMol / rt + gOffset[i];
     phases[phase].species.push(i);
     species.push({ id: s.id, phase, charge: s.charge, g, molarMassGPerMol: s.molarMassGPerMol, molarVolumeCm3PerMol: s.molarVolumeCm3PerMol });
     for (let j = 0; j < nE; j++) stoich[i * nE + j] = j === chargeRow ? s.charge : (s.elements[elements[j]] ?? 0);
@@ -258,6 +296,8 @@ function buildTemplate(
       fullChargeRow: chargeRow,
       keep,
       dependent,
+      inputIndex: Int32Array.from(inputIndices),
+      gOffset,
     },
   };
 }

@@ -5,7 +5,7 @@ import { loadDataset, type Dataset } from "../data/load-dataset";
 import { equilibrateSystem, phaseIds } from "../equilibrium/equilibrate";
 import type { EquilibriumFailure } from "../equilibrium/failure";
 import { GAS_CONSTANT_J_PER_MOL_K } from "../equilibrium/problem";
-import type { EquilibriumResult } from "../equilibrium/result";
+import type { EquilibriumResult, SerializedState } from "../equilibrium/result";
 import { serviceTemperatureRangeC, type ExposureInput } from "../schema/exposure-input";
 import { saturationPressureBar } from "../thermo/water-saturation-pressure";
 import { alkaliBoundFractionOf, bookedPaste, recordPaste, type ScenarioBase, type ScenarioSweep, type SweepPoint } from "./sweep";
@@ -308,7 +308,27 @@ const molesIn = (phases: readonly { id: string; moles: number }[], id: string) =
 const volumeIn = (phases: readonly { id: string; volumeCm3: number }[], id: string) => phases.find((p) => p.id === id)?.volumeCm3 ?? 0;
 
 /** The dried state of the saturated paste's solids at (T, RH), or the saturated state itself where RH ≥ 99.5 %. */
-function driedState(ctx: SaturatedContext, temperatureC: number, relativeHumidityPercent: number, saturated: boolean, dataset: Dataset, withTransitions = true): Outcome<DryingState> {
+/** The largest saturation index of an allowed solid absent from a result (−∞ when none). */
+function maxAbsentSaturationIndex(result: EquilibriumResult, suppressed: ReadonlySet<string>): number {
+  const present = new Set(result.phases.map((p) => p.id));
+  let maxSi = Number.NEGATIVE_INFINITY;
+  for (const [id, si] of Object.entries(result.saturationIndices)) if (!suppressed.has(id) && !present.has(id) && si > maxSi) maxSi = si;
+  return maxSi;
+}
+
+/**
+ * The dried state; `chain.warmStart` starts the solid–gas equilibrium from a neighbouring humidity's (the sweep), and
+ * a warm result that leaves an allowed solid supersaturated is solved again cold. `chain.onState` receives the state.
+ */
+function driedState(
+  ctx: SaturatedContext,
+  temperatureC: number,
+  relativeHumidityPercent: number,
+  saturated: boolean,
+  dataset: Dataset,
+  withTransitions = true,
+  chain: { warmStart?: SerializedState; onState?: (state: SerializedState) => void } = {},
+): Outcome<DryingState> {
   const before = ctx.paste.assemblage.phases.filter((p) => p.kind !== "gas").map((p) => ({ id: p.id, moles: p.moles, volumeCm3: p.volumeCm3 }));
   let after = before;
   let waterReleasedMol = 0;
@@ -316,8 +336,11 @@ function driedState(ctx: SaturatedContext, temperatureC: number, relativeHumidit
   let vapourBar: number | null = null;
   if (!saturated) {
     vapourBar = vapourPressureBar(temperatureC, relativeHumidityPercent);
-    const result = equilibrateSystem({ temperatureC, elementTotalsMol: ctx.totals, fixedPartialPressuresBar: { H2O: vapourBar }, suppressedPhases: ctx.suppressed, dataset });
+    const spec = { temperatureC, elementTotalsMol: ctx.totals, fixedPartialPressuresBar: { H2O: vapourBar }, suppressedPhases: ctx.suppressed, dataset };
+    let result = equilibrateSystem({ ...spec, warmStart: chain.warmStart });
+    if (chain.warmStart && (!result.ok || maxAbsentSaturationIndex(result.value, new Set(ctx.suppressed)) > SUPERSATURATION_TOLERANCE)) result = equilibrateSystem(spec);
     if (!result.ok) return result;
+    chain.onState?.(result.value.state);
     after = result.value.phases.filter((p) => p.kind !== "gas").map((p) => ({ id: p.id, moles: p.moles, volumeCm3: p.volumeCm3 }));
     waterReleasedMol = -Object.values(result.value.gasUptakeMol).reduce((sum, mol) => sum + mol, 0);
     saturationIndices = result.value.saturationIndices;
@@ -462,8 +485,10 @@ export function dryingScenario(
   const hotContext = contexts.get(hottest)!;
   const unreacted = hotContext.paste.phases.filter((p) => p.origin === "unreacted");
   const points: SweepPoint[] = [];
+  let previousState: SerializedState | undefined;
   for (const rh of options.serviceOnly ? [] : logarithmicHumiditiesPercent(options.points)) {
-    const state = driedState({ ...hotContext, families: [] }, hottest, rh, false, dataset);
+    // Each humidity starts from the previous one's solids (checked: a supersaturated warm result is solved cold).
+    const state = driedState({ ...hotContext, families: [] }, hottest, rh, false, dataset, true, { warmStart: previousState, onState: (s) => (previousState = s) });
     if (!state.ok) return state;
     const phaseVolumesCm3: Record<string, number> = {};
     for (const p of state.value.phases) phaseVolumesCm3[p.id] = (phaseVolumesCm3[p.id] ?? 0) + p.volumeCm3;

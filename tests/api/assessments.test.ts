@@ -119,7 +119,9 @@ describe("/api/v1/assessments/{id}", () => {
     expect(csv.headers.get("content-type")).toMatch(/text\/csv/);
     const lines = (await csv.text()).split("\r\n");
     expect(lines[0]).toBe("chart,x,x unit,x value,series,unit,value");
-    expect(lines).toContain("phase-volumes,Assemblage,,28 d at 20 °C,portlandite,cm³/100 g binder,8");
+    // Phases under their readable names, as in the results page's CSV (phaseLabel).
+    expect(lines).toContain("phase-volumes,Assemblage,,28 d at 20 °C,Portlandite,cm³/100 g binder,8");
+    expect(lines.some((line) => line.split(",")[4] === "portlandite")).toBe(false);
     const missing = await getOne(jsonRequest(`/assessments/none.csv`, "GET"), context({ id: "none.csv" }));
     expect(missing.status).toBe(404);
   });

@@ -2,6 +2,7 @@ import type { BulkComposition } from "../cement/bulk-composition";
 import { hydratePaste, type HydratedPaste } from "../cement/hydrate-paste";
 import type { Dataset } from "../data/load-dataset";
 import type { EquilibriumFailure } from "../equilibrium/failure";
+import type { SerializedState } from "../equilibrium/result";
 
 /** One point of a scenario sweep, in the shape the charts read (`lib/charts/scenario-sweep.ts`). */
 export type SweepPoint = {
@@ -105,24 +106,30 @@ export function sweepPaste(
   chain = "sweep",
 ): { ok: true; value: { dose: number; paste: HydratedPaste }[] } | { ok: false; error: SweepFailure } {
   const out: { dose: number; paste: HydratedPaste }[] = [];
-  let previous: HydratedPaste | undefined = base.warmFrom;
+  // The last point of the chain: its state and its bound-alkali fractions (of its own totals), the next point's start.
+  let previous: { state: SerializedState; fraction: Record<string, number> } | undefined;
   for (const dose of doses) {
     const change = at(dose);
     const reacted = { ...base.composition.reactedElementsMol } as Record<string, number>;
     for (const [element, mol] of Object.entries(change.addedElementsMol ?? {})) reacted[element] = (reacted[element] ?? 0) + mol;
     const composition: BulkComposition = { ...base.composition, reactedElementsMol: reacted as BulkComposition["reactedElementsMol"] };
-    const start = bookedPaste(base.book, chain, dose, true) ?? previous;
+    const booked = bookedPaste(base.book, chain, dose, true);
+    let warmStart: SerializedState | undefined;
+    let alkaliBoundFraction: Record<string, number> | undefined;
+    if (booked) [warmStart, alkaliBoundFraction] = [booked.assemblage.state, alkaliBoundFractionOf(booked, reacted)];
+    else if (previous) [warmStart, alkaliBoundFraction] = [previous.state, previous.fraction];
+    else if (base.warmFrom) [warmStart, alkaliBoundFraction] = [base.warmFrom.assemblage.state, alkaliBoundFractionOf(base.warmFrom, reacted)];
     const paste = hydratePaste(composition, {
       temperatureC: change.temperatureC ?? base.temperatureC,
       binderContentKgPerM3: base.binderContentKgPerM3,
       suppress: [...(base.suppress ?? []), ...(change.suppress ?? [])],
       enable: base.enable,
-      warmStart: start?.assemblage.state,
-      alkaliBoundFraction: start ? alkaliBoundFractionOf(start, reacted) : undefined,
+      warmStart,
+      alkaliBoundFraction,
       dataset: base.dataset,
     });
     if (!paste.ok) return { ok: false, error: { ...paste.error, dose } };
-    previous = paste.value;
+    previous = { state: paste.value.assemblage.state, fraction: alkaliBoundFractionOf(paste.value, reacted) };
     recordPaste(base.book, chain, dose, paste.value);
     out.push({ dose, paste: paste.value });
   }

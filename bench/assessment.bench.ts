@@ -1,7 +1,13 @@
 import { loadDataset } from "../lib/data/load-dataset";
 import { runAssessment } from "../lib/service/assess";
 
-/** A full assessment (base, timeline and scenarios at 40 points, no Monte Carlo), and with 200 Monte Carlo samples. Targets 300 ms and 5 s. */
+/**
+ * A full assessment (base, timeline and scenarios at 40 points, no Monte Carlo), and with 200 Monte Carlo samples.
+ * Targets 300 ms and 5 s (issue 5). The first run is reported apart: it fills the per-data-set caches (standard
+ * potentials per temperature, problem structures, the drying map and transition humidities) and warms the JIT; the
+ * figure against the target is the median of the three runs after it. The Monte Carlo figure includes one
+ * deterministic assessment and the reference run of the samples' path; the per-sample figure subtracts the former.
+ */
 export async function run(): Promise<Record<string, unknown>> {
   if (!loadDataset().ok) throw new Error("data set invalid");
   const input = {
@@ -12,14 +18,23 @@ export async function run(): Promise<Record<string, unknown>> {
     curing: { maxTemperatureC: 60 },
     options: { sweepPoints: 40 },
   };
+  const samples = 200;
   const time = async (value: unknown) => {
     const start = performance.now();
     const r = await runAssessment(value);
     if (!r.ok) throw new Error(`assessment failed: ${JSON.stringify(r.error)}`);
     return performance.now() - start;
   };
-  await time(input);
+  const first = await time(input);
   const full = [await time(input), await time(input), await time(input)].sort((a, b) => a - b)[1];
-  const monteCarlo = await time({ ...input, options: { sweepPoints: 40, monteCarlo: { samples: 200, seed: 1 } } });
-  return { fullAssessment40PointsMedianMs: full, monteCarlo200SamplesMs: monteCarlo, targets: { fullMs: 300, monteCarloMs: 5000 } };
+  const monteCarlo = await time({ ...input, options: { sweepPoints: 40, monteCarlo: { samples, seed: 1 } } });
+  const round = (ms: number) => Math.round(ms);
+  return {
+    fullAssessment40PointsFirstRunMs: round(first),
+    fullAssessment40PointsMedianMs: round(full),
+    monteCarlo200SamplesMs: round(monteCarlo),
+    monteCarloPerSampleMs: Math.round(((monteCarlo - full) / samples) * 10) / 10,
+    targets: { fullMs: 300, monteCarloMs: 5000 },
+    meetsTargets: { full: full < 300, monteCarlo: monteCarlo < 5000 },
+  };
 }

@@ -39,6 +39,11 @@ describe("runAssessment", () => {
     expect(a.value.flags.map((f) => f.robustness)).toEqual(b.value.flags.map((f) => f.robustness));
   }, 240_000);
 
+  // The samples do not follow the deterministic path (lib/service/assess.ts): each starts every equilibrium from a
+  // reference run at the same point, solves drying at the service conditions only, and finds the ettringite and
+  // thaumasite stability temperatures by root finding from the reference's instead of on a grid. Like is still compared
+  // with like: the base paste is the same system (its volumes must agree to 1e-10 cm³), and every flag the
+  // deterministic run raises must fire in every sample; a path that reached another minimum or another limit would fail.
   it("makes every sample equal the deterministic result when the uncertainties are zero", async () => {
     const dataset = loadDataset();
     if (!dataset.ok) throw new Error();

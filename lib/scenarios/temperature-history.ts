@@ -4,7 +4,7 @@ import { loadDataset, type Dataset } from "../data/load-dataset";
 import type { EquilibriumFailure } from "../equilibrium/failure";
 import type { SerializedState } from "../equilibrium/result";
 import { serviceTemperatureRangeC, type ExposureInput } from "../schema/exposure-input";
-import { alkaliBoundFractionOf, bookedPaste, linearDoses, phaseMoles, recordPaste, sweepPoint, type ScenarioBase, type ScenarioSweep, type SweepFailure, type SweepPoint } from "./sweep";
+import { alkaliBoundFractionOf, bookedPaste, linearDoses, phaseMoles, recordPaste, sweepPoint, type ScenarioBase, type ScenarioSweep, type SweepFailure, type SweepPoint, type WarmStartBook } from "./sweep";
 
 /**
  * Temperature history and delayed ettringite formation (DEF). The same bulk composition is equilibrated
@@ -343,6 +343,20 @@ export function phaseStabilityLimit(
     : { kind: "bracketed", bracketC: [present.temperatureC, absent.temperatureC], failure: `${root.error.code} at ${root.error.temperatureC} °C` };
 }
 
+/**
+ * d SI / d T (per °C) of a phase near a temperature, from the two pastes of a book's chain nearest to it (the reference
+ * run's evaluations without the phase); undefined when the chain has fewer than two usable points.
+ */
+export function bookedSlopePerC(book: WarmStartBook | undefined, chain: string, phaseId: string, nearC: number): number | undefined {
+  const entries = (book?.chains.get(chain) ?? [])
+    .map((e) => ({ t: e.point, si: e.paste.assemblage.saturationIndices[phaseId] }))
+    .filter((e) => Number.isFinite(e.si))
+    .sort((a, b) => Math.abs(a.t - nearC) - Math.abs(b.t - nearC));
+  const first = entries[0];
+  const second = entries.find((e) => e.t !== first?.t);
+  return first && second ? (second.si - first.si) / (second.t - first.t) : undefined;
+}
+
 /** Name of a stability limit in a `WarmStartBook`'s figures. */
 export const stabilityFigure = (chain: string, phaseId: string) => `${chain}:${phaseId}:stability-limit-C`;
 
@@ -380,6 +394,8 @@ export function stabilityLimitNear(
   hintC: number,
   toleranceC: number,
   maxIterations: number,
+  /** d SI / d T near the hint (per °C, from the reference run): the first step then goes to just past the predicted root. */
+  slopePerC?: number,
 ): StabilityLimit {
   const evaluated: HydratedPaste[] = [];
   const f = (t: number): { ok: true; value: number } | { ok: false; error: EquilibriumFailure & { temperatureC: number } } => {
@@ -395,7 +411,11 @@ export function stabilityLimitNear(
   let innerValue = first.value;
   const stableAtHint = innerValue >= 0;
   let step = FIRST_STEP_C;
+  // With the reference's slope, the first step goes to just past the linearly predicted root (one tolerance beyond it).
+  const predictedStepC = slopePerC !== undefined && slopePerC < 0 && Number.isFinite(innerValue) ? Math.abs(innerValue / slopePerC) + toleranceC : undefined;
   for (let i = 0; i < MAX_STEPS; i++) {
+    if (i === 0 && predictedStepC !== undefined) step = Math.min(predictedStepC, FIRST_STEP_C * 2 ** (MAX_STEPS - 1));
+    else if (i === 1 && predictedStepC !== undefined) step = Math.max(FIRST_STEP_C, 2 * predictedStepC);
     const t = stableAtHint ? Math.min(range.toC, inner + step) : Math.max(range.fromC, inner - step);
     if (t === inner) return stableAtHint ? { kind: "stable-throughout", upToC: range.toC } : { kind: "absent-throughout", fromC: range.fromC, toC: range.toC };
     const next = f(t);
@@ -410,7 +430,7 @@ export function stabilityLimitNear(
     }
     inner = t;
     innerValue = next.value;
-    step *= 2;
+    if (!(i === 0 && predictedStepC !== undefined)) step *= 2;
   }
   return { kind: "bracketed", bracketC: [range.fromC, range.toC], failure: "no sign change within the step cap" };
 }
@@ -566,7 +586,7 @@ export function temperatureHistory(
   const hintC = base.book?.figures.get(figure);
   const stabilityLimit =
     reduced && hintC !== undefined
-      ? stabilityLimitNear(withoutEttringite, "ettringite", { fromC, toC }, hintC, tolerance, maxIterations)
+      ? stabilityLimitNear(withoutEttringite, "ettringite", { fromC, toC }, hintC, tolerance, maxIterations, bookedSlopePerC(base.book, "temperature-without-ettringite", "ettringite", hintC))
       : phaseStabilityLimit(points, "ettringite", withoutEttringite, tolerance, maxIterations);
   if (base.book?.mode === "record") base.book.figures.set(figure, stabilityHintC(stabilityLimit));
 

@@ -3,7 +3,7 @@ import type { HydratedPaste } from "../cement/hydrate-paste";
 import { loadDataset } from "../data/load-dataset";
 import { serviceTemperatureRangeC, type ExposureInput } from "../schema/exposure-input";
 import { linearDoses, phaseMoles, sweepPoint, type ScenarioBase, type ScenarioSweep, type SweepFailure, type SweepPoint } from "./sweep";
-import { byDistance, formationGibbsKJPerMol, pasteAtTemperature, recent, phaseStabilityLimit, stabilityFigure, stabilityHintC, stabilityLimitNear, supersaturatedSolid, DATA_SET_MAX_C, DATA_SET_MIN_C, DEFAULT_MAX_ITERATIONS, DEFAULT_TOLERANCE_C, type EquilibriumChecks, type StabilityLimit } from "./temperature-history";
+import { bookedSlopePerC, byDistance, formationGibbsKJPerMol, pasteAtTemperature, recent, phaseStabilityLimit, stabilityFigure, stabilityHintC, stabilityLimitNear, supersaturatedSolid, DATA_SET_MAX_C, DATA_SET_MIN_C, DEFAULT_MAX_ITERATIONS, DEFAULT_TOLERANCE_C, type EquilibriumChecks, type StabilityLimit } from "./temperature-history";
 
 /**
  * Thaumasite, Ca6Si2(SO4)2(CO3)2(OH)12·24H2O: the C-S-H of the paste reacts with sulfate and carbonate and loses
@@ -244,7 +244,7 @@ export function thaumasite(
   const maxIterations = options.maxIterations ?? DEFAULT_MAX_ITERATIONS;
   const stabilityLimit =
     reduced && hintC !== undefined
-      ? stabilityLimitNear(withoutThaumasite, "thaumasite", { fromC, toC }, hintC, tolerance, maxIterations)
+      ? stabilityLimitNear(withoutThaumasite, "thaumasite", { fromC, toC }, hintC, tolerance, maxIterations, bookedSlopePerC(base.book, "thaumasite-without-thaumasite", "thaumasite", hintC))
       : phaseStabilityLimit(points, "thaumasite", withoutThaumasite, tolerance, maxIterations);
   if (base.book?.mode === "record") base.book.figures.set(figure, stabilityHintC(stabilityLimit));
 

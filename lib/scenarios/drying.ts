@@ -475,7 +475,15 @@ export function dryingScenario(
   const service: DryingState[] = [];
   if (serviceRh !== null)
     for (const temperatureC of temperatures) {
-      const state = driedState(contexts.get(temperatureC)!, temperatureC, Math.min(serviceRh, 100), serviceSaturated, dataset, !options.serviceOnly);
+      // A Monte Carlo sample starts the dried solids from the reference run's at the same conditions (checked as in the sweep).
+      const key = `drying-service@${temperatureC}`;
+      const book = base.book;
+      const state = driedState(contexts.get(temperatureC)!, temperatureC, Math.min(serviceRh, 100), serviceSaturated, dataset, !options.serviceOnly, {
+        warmStart: book?.mode === "read" ? book.states.get(key) : undefined,
+        onState: (s) => {
+          if (book?.mode === "record") book.states.set(key, s);
+        },
+      });
       if (!state.ok) return state;
       if (state.value.maxSaturationIndexOfAbsentSolids > SUPERSATURATION_TOLERANCE)
         warnings.push(`at ${temperatureC} °C, ${serviceRh} % RH an allowed solid is absent but supersaturated (SI ${state.value.maxSaturationIndexOfAbsentSolids.toFixed(3)}): not a converged equilibrium`);

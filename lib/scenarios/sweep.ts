@@ -53,10 +53,12 @@ export type WarmStartBook = {
   chains: Map<string, { point: number; paste: HydratedPaste }[]>;
   /** Figures of the reference run that seed a sample's root finding (e.g. a stability temperature), by name. */
   figures: Map<string, number>;
+  /** Solver states of equilibria other than pastes (e.g. the dried solids of the drying scenario), by name. */
+  states: Map<string, SerializedState>;
 };
 
 export function newWarmStartBook(): WarmStartBook {
-  return { mode: "record", chains: new Map(), figures: new Map() };
+  return { mode: "record", chains: new Map(), figures: new Map(), states: new Map() };
 }
 
 /** The same pastes and figures, for reading. */

@@ -4,7 +4,7 @@ import { hydrationFamilies } from "../../lib/data/hydration-states";
 import { loadDataset } from "../../lib/data/load-dataset";
 import { GAS_CONSTANT_J_PER_MOL_K } from "../../lib/equilibrium/problem";
 import { dryingScenario, familyTransitionRhPercent, hydrationStateMaps, type DryingScenario } from "../../lib/scenarios/drying";
-import type { ScenarioBase } from "../../lib/scenarios/sweep";
+import { newWarmStartBook, readingBook, type ScenarioBase } from "../../lib/scenarios/sweep";
 import { exposureInput } from "../../lib/schema/exposure-input";
 
 /**
@@ -162,5 +162,19 @@ describe("the Monte Carlo path (service conditions only)", () => {
     expect(reduced.summary.stableMembers).toEqual(full.summary.stableMembers);
     expect(reduced.summary.ettringiteDehydrationGibbsKJPerMol!).toBeCloseTo(full.summary.ettringiteDehydrationGibbsKJPerMol!, 6);
     expect(reduced.service.map((s) => s.families.map((f) => f.nextTransitionBelowRhPercent))).toEqual(full.service.map((s) => s.families.map(() => null)));
+  });
+
+  it("reaches the same dried state from the reference run's solver state as from a cold start (like with like: same data)", () => {
+    const raw = exposureInput.parse({ relativeHumidityPercent: 3, serviceTemperatureC: 60, wetting: "wet-dry" });
+    const book = newWarmStartBook();
+    const reference = dryingScenario({ ...base, book }, raw, { points: 8, serviceOnly: true });
+    if (!reference.ok) throw new Error(JSON.stringify(reference.error));
+    expect(book.states.size).toBe(1);
+    const sample = dryingScenario({ ...base, book: readingBook(book) }, raw, { points: 8, serviceOnly: true });
+    if (!sample.ok) throw new Error(JSON.stringify(sample.error));
+    const [a, b] = [reference.value.service[0], sample.value.service[0]];
+    expect(b.phases.map((p) => p.id)).toEqual(a.phases.map((p) => p.id));
+    b.phases.forEach((p, i) => expect(p.moles, p.id).toBeCloseTo(a.phases[i].moles, 9));
+    expect(b.waterReleasedMol).toBeCloseTo(a.waterReleasedMol, 9);
   });
 });

@@ -457,15 +457,16 @@ export function dryingScenario(
 
   const contexts = new Map<number, SaturatedContext>();
   for (const temperatureC of temperatures) {
-    const start = bookedPaste(base.book, "drying", temperatureC) ?? base.warmFrom;
+    // A sample starts from the reference's paste at this temperature; otherwise the base's solver state only (see `ScenarioBase.warmFrom`).
+    const booked = bookedPaste(base.book, "drying", temperatureC);
     const paste = hydratePaste(base.composition, {
       temperatureC,
       binderContentKgPerM3: base.binderContentKgPerM3,
       suppress: base.suppress,
       enable: base.enable,
       dataset,
-      warmStart: start?.assemblage.state,
-      alkaliBoundFraction: start ? alkaliBoundFractionOf(start, base.composition.reactedElementsMol) : undefined,
+      warmStart: (booked ?? base.warmFrom)?.assemblage.state,
+      alkaliBoundFraction: booked ? alkaliBoundFractionOf(booked, base.composition.reactedElementsMol) : undefined,
     });
     if (!paste.ok) return paste;
     recordPaste(base.book, "drying", temperatureC, paste.value);

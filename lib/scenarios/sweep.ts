@@ -32,7 +32,8 @@ export type ScenarioBase = {
   dataset?: Dataset;
   /**
    * A converged paste of the base composition (at `temperatureC`, or near it): the warm start of the first point of
-   * every chain, so that the scenarios do not each solve the unexposed paste from a cold start.
+   * every chain, so that the scenarios do not each solve the unexposed paste from a cold start. Only its solver state is
+   * used; the alkali-uptake iteration still starts from no bound alkali, as from a cold start.
    */
   warmFrom?: HydratedPaste;
   /** Converged pastes of a reference run, recorded or read point by point (Monte Carlo samples; see `WarmStartBook`). */
@@ -120,7 +121,9 @@ export function sweepPaste(
     let alkaliBoundFraction: Record<string, number> | undefined;
     if (booked) [warmStart, alkaliBoundFraction] = [booked.assemblage.state, alkaliBoundFractionOf(booked, reacted)];
     else if (previous) [warmStart, alkaliBoundFraction] = [previous.state, previous.fraction];
-    else if (base.warmFrom) [warmStart, alkaliBoundFraction] = [base.warmFrom.assemblage.state, alkaliBoundFractionOf(base.warmFrom, reacted)];
+    // From the base's paste only the solver state: the alkali-uptake iteration starts from no bound alkali, as a cold
+    // first point does, so that it stops where it did (it stops within a tolerance, so its result depends on its start).
+    else if (base.warmFrom) warmStart = base.warmFrom.assemblage.state;
     const paste = hydratePaste(composition, {
       temperatureC: change.temperatureC ?? base.temperatureC,
       binderContentKgPerM3: base.binderContentKgPerM3,

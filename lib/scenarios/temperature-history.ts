@@ -274,7 +274,8 @@ export function pasteAtTemperature(base: ScenarioBase, addedElementsMol: Record<
   const composition = { ...base.composition, reactedElementsMol: reacted as typeof base.composition.reactedElementsMol };
   const solve = (temperatureC: number, warm?: HydratedPaste) => {
     const warmStart: SerializedState | undefined = warm?.assemblage.state;
-    const alkaliBoundFraction = warm ? alkaliBoundFractionOf(warm, reacted) : undefined;
+    // The base's paste gives only its solver state (see `ScenarioBase.warmFrom`).
+    const alkaliBoundFraction = warm && warm !== base.warmFrom ? alkaliBoundFractionOf(warm, reacted) : undefined;
     return hydratePaste(composition, {
       temperatureC,
       binderContentKgPerM3: base.binderContentKgPerM3,

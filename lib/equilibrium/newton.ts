@@ -1,5 +1,6 @@
 import { solveInPlace } from "./dense-lu";
 import { WATER_MOLAR_MASS_KG_PER_MOL, type EquilibriumProblem } from "./problem";
+import type { SoluteActivityTerms } from "./types";
 
 /**
  * The state of the element-potential formulation (Gordon & McBride 1994, NASA RP-1311, ch. 2; Smith &
@@ -50,19 +51,6 @@ export type AqueousEvaluation = {
   dLnAwDI: number;
 };
 
-/** ln γ, d ln γ/dI, c and dc/dI of one activity-parameter key at I (central differences in I). */
-function activityTerms(p: EquilibriumProblem, speciesId: string, charge: number, ionicStrength: number): [number, number, number, number] {
-  const h = 1e-5 * ionicStrength;
-  const lower = Math.max(0, ionicStrength - h);
-  const width = ionicStrength + h - lower;
-  const m = p.activity;
-  const lg = LN10 * m.log10Gamma(speciesId, charge, ionicStrength);
-  const dlg = width > 0 ? (LN10 * (m.log10Gamma(speciesId, charge, ionicStrength + h) - m.log10Gamma(speciesId, charge, lower))) / width : 0;
-  const c = m.waterCoefficient(speciesId, charge, ionicStrength);
-  const dc = width > 0 ? (m.waterCoefficient(speciesId, charge, ionicStrength + h) - m.waterCoefficient(speciesId, charge, lower)) / width : 0;
-  return [lg, dlg, c, dc];
-}
-
 export function evaluateAqueous(p: EquilibriumProblem, lambda: Float64Array, lnIonicStrength: number): AqueousEvaluation {
   const nS = p.species.length;
   const nE = p.elements.length;
@@ -75,17 +63,13 @@ export function evaluateAqueous(p: EquilibriumProblem, lambda: Float64Array, lnI
   let chargedMolality = 0;
   let sumMC = 0;
   let sumMDc = 0;
-  const cache = new Map<string, [number, number, number, number]>();
+  const classTerms: (SoluteActivityTerms | undefined)[] = new Array(p.activityTerms.length);
   if (p.aqueous >= 0) {
     for (const i of p.phases[p.aqueous].species) {
       if (i === p.water) continue;
-      const { id, charge } = p.species[i];
-      const key = p.activityKey[i];
-      let terms = cache.get(key);
-      if (!terms) {
-        terms = activityTerms(p, id, charge, ionicStrength);
-        cache.set(key, terms);
-      }
+      const charge = p.species[i].charge;
+      const k = p.activityClass[i];
+      const terms = classTerms[k] ?? (classTerms[k] = p.activityTerms[k](ionicStrength));
       const [lg, dlg, c, dc] = terms;
       let t = -p.species[i].g - lg;
       for (let j = 0; j < nE; j++) t += p.stoich[i * nE + j] * lambda[j];

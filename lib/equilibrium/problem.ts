@@ -1,4 +1,4 @@
-import type { AqueousActivityModel, SpeciesAtTemperature } from "./types";
+import type { AqueousActivityModel, SoluteActivityTerms, SpeciesAtTemperature } from "./types";
 import type { EquilibriumOutcome } from "./failure";
 
 /** Molar gas constant, J/(mol·K) (CODATA 2018, exact). */
@@ -50,8 +50,10 @@ export type EquilibriumProblem = {
   /** Per species, the element columns with a non-zero coefficient (most species have three or four). */
   nonZero: Int32Array[];
   activity: AqueousActivityModel;
-  /** Per species, the activity model's parameter key (solutes sharing a key share γ); "" for non-solutes. */
-  activityKey: string[];
+  /** Per species, the index of its activity class in `activityTerms` (solutes sharing a parameter key share it); −1 for non-solutes. */
+  activityClass: Int32Array;
+  /** Per activity class, [ln γ, d ln γ/dI, c, dc/dI] as a function of I (the model's `soluteTerms`). */
+  activityTerms: ((ionicStrengthMolPerKg: number) => SoluteActivityTerms)[];
 };
 
 export type ProblemInput = {
@@ -162,13 +164,35 @@ export function buildProblem(input: ProblemInput): EquilibriumOutcome<Equilibriu
       ...template.problem,
       totals: Float64Array.from(template.keep, (j) => fullTotals[j]),
       activity: input.activity,
-      activityKey: template.problem.species.map((s) => (s.phase === template.problem.aqueous ? input.activity.parameterKey(s.id, s.charge) : "")),
+      ...activityClasses(template.problem, input.activity),
     },
   };
 }
 
+/** Groups the solutes by the activity model's parameter key and resolves each class's terms once. */
+function activityClasses(
+  problem: Pick<EquilibriumProblem, "species" | "aqueous" | "water">,
+  activity: AqueousActivityModel,
+): Pick<EquilibriumProblem, "activityClass" | "activityTerms"> {
+  const activityClass = new Int32Array(problem.species.length).fill(-1);
+  const activityTerms: EquilibriumProblem["activityTerms"] = [];
+  const byKey = new Map<string, number>();
+  problem.species.forEach((s, i) => {
+    if (s.phase !== problem.aqueous || i === problem.water) return;
+    const key = activity.parameterKey(s.id, s.charge);
+    let index = byKey.get(key);
+    if (index === undefined) {
+      index = activityTerms.length;
+      byKey.set(key, index);
+      activityTerms.push(activity.soluteTerms(s.id, s.charge));
+    }
+    activityClass[i] = index;
+  });
+  return { activityClass, activityTerms };
+}
+
 type ProblemTemplate = {
-  problem: Omit<EquilibriumProblem, "totals" | "activity" | "activityKey">;
+  problem: Omit<EquilibriumProblem, "totals" | "activity" | "activityClass" | "activityTerms">;
   fullElements: string[];
   fullChargeRow: number;
   keep: number[];

@@ -35,4 +35,13 @@ export interface AqueousActivityModel {
   log10Gamma(speciesId: string, charge: number, ionicStrengthMolPerKg: number): number;
   /** cᵢ(I), dimensionless, in ln a(H2O) = −M_w Σᵢ mᵢ cᵢ(I), consistent with log10Gamma through Gibbs–Duhem. */
   waterCoefficient(speciesId: string, charge: number, ionicStrengthMolPerKg: number): number;
+  /**
+   * The engine's fast path, resolved once per solute class: a function of I (mol/kg) giving
+   * [ln γ, d ln γ/dI, c, dc/dI], the same quantities as log10Gamma (times ln 10) and waterCoefficient.
+   * The derivatives may be reported as 0 at I = 0, where they diverge (the engine uses them times I).
+   */
+  soluteTerms(speciesId: string, charge: number): (ionicStrengthMolPerKg: number) => SoluteActivityTerms;
 }
+
+/** [ln γ, d ln γ/dI (kg/mol), c, dc/dI (kg/mol)] of one solute at one ionic strength. */
+export type SoluteActivityTerms = readonly [number, number, number, number];

@@ -1,4 +1,4 @@
-import type { AqueousActivityModel } from "../equilibrium/types";
+import type { AqueousActivityModel, SoluteActivityTerms } from "../equilibrium/types";
 import { debyeHuckelParameters } from "./debye-huckel";
 import { waterMolarMassKgPerMol } from "./physical-constants";
 import { ThermoInputError, requireInRange } from "./thermo-error";
@@ -126,6 +126,16 @@ export function lnWaterActivityOf(model: AqueousActivityModel, solutes: SoluteMo
   return -waterMolarMassKgPerMol * sum;
 }
 
+/**
+ * d(F/x²)/dx = 1/(1 + a x)² − 2F/x³, finite (→ 1/3) as x → 0; F/x³ from the series where a x is small,
+ * so no digits are lost to cancellation.
+ */
+function osmoticRatioSlope(x: number, a: number): number {
+  const ax = a * x;
+  const fOverX3 = ax < seriesThreshold ? debyeHuckelOsmoticIntegral(1, ax) : debyeHuckelOsmoticIntegral(x, a) / (x * x * x);
+  return 1 / ((1 + ax) * (1 + ax)) - 2 * fOverX3;
+}
+
 /** F(x, a)/x² (x = √I), the ratio the water coefficient needs; finite (→ 0) as x → 0. */
 function osmoticIntegralOverIonicStrength(x: number, a: number): number {
   if (x === 0) return 0;
@@ -179,6 +189,28 @@ export function truesdellJonesModel(temperatureK: number, params: TruesdellJones
       if (!ion) return neutralCarriesBDot ? params.bDotKgPerMol * ionicStrengthMolPerKg : 0;
       const rootI = Math.sqrt(ionicStrengthMolPerKg);
       return (-a * charge * charge * rootI) / (1 + b * ion.ionSizeAngstrom * rootI) + ion.bDotKgPerMol * ionicStrengthMolPerKg;
+    },
+
+    soluteTerms(speciesId: string, charge: number): (ionicStrengthMolPerKg: number) => SoluteActivityTerms {
+      requireCharge(charge);
+      const ion = parametersOf(speciesId, charge);
+      if (!ion) {
+        const bDot = neutralCarriesBDot ? params.bDotKgPerMol : 0;
+        return (ionicStrength) => [Math.LN10 * bDot * ionicStrength, Math.LN10 * bDot, 1 + (Math.LN10 * bDot * ionicStrength) / 2, (Math.LN10 * bDot) / 2];
+      }
+      const az2 = a * charge * charge;
+      const sizeTerm = b * ion.ionSizeAngstrom;
+      const bDot = ion.bDotKgPerMol;
+      return (ionicStrength) => {
+        const x = Math.sqrt(ionicStrength);
+        const denominator = 1 + sizeTerm * x;
+        const lnGamma = Math.LN10 * ((-az2 * x) / denominator + bDot * ionicStrength);
+        const c = 1 - Math.LN10 * az2 * osmoticIntegralOverIonicStrength(x, sizeTerm) + (Math.LN10 * bDot * ionicStrength) / 2;
+        if (x === 0) return [lnGamma, 0, c, 0];
+        const dLnGamma = Math.LN10 * (-az2 / (2 * x * denominator * denominator) + bDot);
+        const dc = -Math.LN10 * az2 * (osmoticRatioSlope(x, sizeTerm) / (2 * x)) + (Math.LN10 * bDot) / 2;
+        return [lnGamma, dLnGamma, c, dc];
+      };
     },
 
     waterCoefficient(speciesId: string, charge: number, ionicStrengthMolPerKg: number): number {

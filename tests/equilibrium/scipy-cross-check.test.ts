@@ -73,6 +73,7 @@ const idealDilute: AqueousActivityModel = {
   parameterKey: () => "ideal",
   log10Gamma: () => 0,
   waterCoefficient: () => 1,
+  soluteTerms: () => () => [0, 0, 1, 0],
 };
 
 type DualPhase = { id: string; kind: string; slack: number; active: boolean; multiplier: number };

@@ -218,3 +218,35 @@ describe("b-dot model with the individual Truesdell–Jones ion parameters", () 
     expect(lnWaterActivityOf(a, mixedElectrolyte)).toBeCloseTo(lnWaterActivityOf(b, mixedElectrolyte), 14);
   });
 });
+
+describe("the engine's fast path (soluteTerms)", () => {
+  const models = {
+    common: truesdellJonesModel(temperature25CK, potassiumHydroxideDominatedParameters),
+    saltingOut: truesdellJonesModel(temperature25CK, { ...sodiumChlorideDominatedParameters, neutral: "salting-out" }),
+    individual: truesdellJonesModel(temperature25CK, { ...sodiumChlorideDominatedParameters, individual: individualIonParameters() }),
+  };
+  const solutes = [["Ca+2", 2], ["SO4-2", -2], ["K+", 1], ["OH-", -1], ["CO2(aq)", 0], ["AlO2-", -1]] as const;
+
+  for (const [name, model] of Object.entries(models)) {
+    it(`gives the same ln γ and c as log10Gamma and waterCoefficient, and their derivatives in I by central differences (${name})`, () => {
+      for (const [id, charge] of solutes) {
+        const terms = model.soluteTerms(id, charge);
+        for (const ionicStrength of [1e-9, 1e-4, 0.01, 0.3, 0.09, 1.5]) {
+          const [lnGamma, dLnGamma, c, dc] = terms(ionicStrength);
+          expect(lnGamma).toBeCloseTo(Math.LN10 * model.log10Gamma(id, charge, ionicStrength), 13);
+          expect(c).toBeCloseTo(model.waterCoefficient(id, charge, ionicStrength), 13);
+          const h = 1e-4 * ionicStrength; // c is close to 1: a smaller step loses the difference to rounding
+          const centralLnGamma = (Math.LN10 * (model.log10Gamma(id, charge, ionicStrength + h) - model.log10Gamma(id, charge, ionicStrength - h))) / (2 * h);
+          const centralC = (model.waterCoefficient(id, charge, ionicStrength + h) - model.waterCoefficient(id, charge, ionicStrength - h)) / (2 * h);
+          // Truncation (relative 1e-6 here) plus the rounding of a difference of two values of order 1.
+          const rounding = 4e-16 / h;
+          expect(Math.abs(dLnGamma - centralLnGamma)).toBeLessThan(1e-6 * Math.max(1, Math.abs(centralLnGamma)) + rounding);
+          expect(Math.abs(dc - centralC)).toBeLessThan(1e-6 * Math.max(1, Math.abs(centralC)) + rounding);
+        }
+        const atZero = terms(0);
+        const expectedAtZero = [0, charge === 0 && name === "saltingOut" ? Math.LN10 * 0.064 : 0, 1, charge === 0 && name === "saltingOut" ? (Math.LN10 * 0.064) / 2 : 0];
+        atZero.forEach((value, k) => expect(value).toBeCloseTo(expectedAtZero[k], 14));
+      }
+    });
+  }
+});

@@ -18,10 +18,13 @@ import { alkaliBoundFractionOf, bookedPaste, linearDoses, phaseMoles, recordPast
  *   goes to AFm, the pore solution or a calcium sulfate in the model, so `sulfateOutsideAft` is the whole of it;
  * - hydrogarnets are suppressed below 50 °C by the default kinetic constraints (`lib/data/kinetic-constraints.json`),
  *   so the assemblage changes step-wise at 50 °C;
- * - the data set's ettringite is known to be too stable at high temperature (about 1.3 log10 units at 85 °C in
- *   its own validation, traced to the constant Cp of Al(OH)4-): the computed stability temperature comes out
- *   higher than the 65–75 °C reported for Portland pastes (about 90 °C for the typical CEM I preset; making ettringite
- *   uniformly 1.3 log10 units less stable lowers it by about 10 °C, so the known issue explains only part of the gap).
+ * - the computed stability temperature comes out higher than the 65–75 °C reported for Portland pastes (about
+ *   89 °C for the typical CEM I preset). Two reasons are known (tests/data/ettringite-temperature.test.ts): above
+ *   50 °C the default constraints let siliceous hydrogarnet take the aluminium the AFm phases would hold, which
+ *   leaves ettringite the only solid host of sulfate; and sulfate uptake by C-S-H, large at high temperature in real
+ *   pastes, is not modelled. The data's ettringite log Ksp departs from Perkins & Palmer's temperature function by
+ *   about 1.3 log10 units at 85 °C, but that comes from the constant Cp of Al(OH)4-, which cancels between
+ *   Al-bearing solids and does not move this limit.
  *   It is reported as computed.
  */
 

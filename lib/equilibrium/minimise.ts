@@ -68,6 +68,20 @@ const WARM_START_MAX_RESETS = 0;
  * dependent sets (which make Newton steps explode) are swapped rather than tried (tuned on this data set).
  */
 const PHASE_ADDITION_PIVOT_TOLERANCE = 1e-7;
+/**
+ * Newton iterations allowed per phase set in a warm-started search: from a neighbouring solution a set
+ * converges in a few iterations or not usefully at all, and the cold start is the better fallback
+ * (tuned on this data set: converged warm sets took at most about 30).
+ */
+const WARM_NEWTON_MAX_ITERATIONS = 60;
+/**
+ * Phase changes allowed in a warm-started search before it hands over to the cold start: neighbouring
+ * points differ by a few phases, and a search that wanders further costs more than the LP start (tuned on
+ * this data set: successful warm searches of the timelines and sweeps made at most 6).
+ */
+const WARM_MAX_PHASE_CHANGES = 10;
+/** Newton iterations allowed per exchange trial (converged trials took at most 25 on this data set). */
+const EXCHANGE_MAX_ITERATIONS = 30;
 /** Saturation index threshold (log10 units) above which an absent phase is added. */
 const ADD_THRESHOLD_LOG10 = 1e-9;
 const LN10 = Math.log(10);
@@ -83,7 +97,8 @@ export function minimise(p: EquilibriumProblem, options: MinimiseOptions = {}): 
     deadline,
   };
   if (options.warmStart && compatible(p, options.warmStart)) {
-    const warm = run(p, cloneState(options.warmStart), newtonOptions, options, deadline, started, limitMs, false, WARM_START_MAX_RESETS);
+    const warmNewton = { ...newtonOptions, maxIterations: Math.min(newtonOptions.maxIterations, WARM_NEWTON_MAX_ITERATIONS) };
+    const warm = run(p, cloneState(options.warmStart), warmNewton, options, deadline, started, limitMs, false, WARM_START_MAX_RESETS, WARM_MAX_PHASE_CHANGES);
     if (warm.ok) return { ok: true, value: { ...warm.value, warmStarted: true } };
   }
   const start = coldStart(p);
@@ -124,8 +139,9 @@ function run(
   limitMs: number,
   allowWaterPairs = false,
   maxResets = MAX_RESETS,
+  maxChangesCap = Infinity,
 ): EquilibriumOutcome<Omit<MinimiseReport, "warmStarted">> {
-  const maxChanges = options.maxPhaseChanges ?? 4 * p.phases.length + 40;
+  const maxChanges = Math.min(options.maxPhaseChanges ?? 4 * p.phases.length + 40, maxChangesCap);
   const blocked = new Uint8Array(p.phases.length);
   const visits = new Map<string, number>();
   let iterations = 0;
@@ -299,7 +315,7 @@ function exchangeForAddition(
     trial.amount[q] = 0;
     trial.active[k] = 1;
     trial.amount[k] = 0;
-    const outcome = solveFixedPhases(p, trial, { ...newtonOptions, maxIterations: Math.min(newtonOptions.maxIterations, 50) });
+    const outcome = solveFixedPhases(p, trial, { ...newtonOptions, maxIterations: Math.min(newtonOptions.maxIterations, EXCHANGE_MAX_ITERATIONS) });
     iterations += outcome.iterations;
     if (!outcome.converged) continue;
     let nonNegative = true;

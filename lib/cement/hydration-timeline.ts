@@ -42,7 +42,18 @@ export function hydrationTimeline(
   const warnings = new Map<string, HydrationWarning>();
   let warmStart: SerializedState | undefined;
   let alkaliBoundFraction: Record<string, number> | undefined;
+  // The bound-alkali fractions of the last two ages, to extrapolate the next age's starting guess linearly in
+  // log(age): the fractions change smoothly, so the uptake iteration then usually needs one equilibrium per age.
+  let previous: { lnAge: number; fraction: Record<string, number> } | undefined;
+  let latest: { lnAge: number; fraction: Record<string, number> } | undefined;
   for (const point of compositions.value) {
+    const lnAge = Math.log(point.ageDays);
+    if (previous && latest && latest.lnAge !== previous.lnAge) {
+      const step = (lnAge - latest.lnAge) / (latest.lnAge - previous.lnAge);
+      const last = latest.fraction;
+      const before = previous.fraction;
+      alkaliBoundFraction = Object.fromEntries(Object.keys(last).map((e) => [e, Math.min(1, Math.max(0, last[e] + step * (last[e] - (before[e] ?? last[e]))))]));
+    }
     const paste = hydratePaste(point.composition, {
       temperatureC: options.temperatureC,
       binderContentKgPerM3: binder.mix.binderContentKgPerM3,
@@ -56,6 +67,8 @@ export function hydrationTimeline(
     warmStart = paste.value.assemblage.state;
     const reacted = point.composition.reactedElementsMol;
     alkaliBoundFraction = Object.fromEntries(Object.entries(paste.value.alkaliInCshMol).map(([e, mol]) => [e, reacted[e as "Na" | "K"] > 0 ? mol / reacted[e as "Na" | "K"] : 0]));
+    previous = latest;
+    latest = { lnAge, fraction: alkaliBoundFraction };
     for (const w of paste.value.warnings) warnings.set(w.code, w);
     entries.push({
       ageDays: point.ageDays,

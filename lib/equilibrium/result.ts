@@ -1,4 +1,4 @@
-import { evaluateAqueous, memberTerms, type SolverState } from "./newton";
+import { evaluateAqueous, memberTerms, type AqueousEvaluation, type SolverState } from "./newton";
 import { phaseSaturationIndex } from "./minimise";
 import { CHARGE_ELEMENT, GAS_CONSTANT_J_PER_MOL_K, WATER_MOLAR_MASS_KG_PER_MOL, type EquilibriumProblem } from "./problem";
 
@@ -88,9 +88,9 @@ export function deserializeState(p: EquilibriumProblem, saved: SerializedState):
 }
 
 /** Species amounts (mol) of the equilibrium state, per problem species. */
-export function speciesAmounts(p: EquilibriumProblem, s: SolverState): Float64Array {
+export function speciesAmounts(p: EquilibriumProblem, s: SolverState, evaluated?: AqueousEvaluation): Float64Array {
   const n = new Float64Array(p.species.length);
-  const aq = p.aqueous >= 0 && s.active[p.aqueous] ? evaluateAqueous(p, s.lambda, s.lnIonicStrength) : undefined;
+  const aq = p.aqueous >= 0 && s.active[p.aqueous] ? (evaluated ?? evaluateAqueous(p, s.lambda, s.lnIonicStrength)) : undefined;
   p.phases.forEach((phase, k) => {
     if (!s.active[k]) return;
     if (phase.kind === "aqueous") {
@@ -129,7 +129,9 @@ export function buildResult(
   meta: { iterations: number; phaseChanges: number; warmStarted: boolean; nearInvariant?: boolean },
 ): EquilibriumResult {
   const rt = GAS_CONSTANT_J_PER_MOL_K * p.temperatureK;
-  const n = speciesAmounts(p, s);
+  // The solution is evaluated once, for the species amounts and the solution report alike.
+  const aqueous = p.aqueous >= 0 && s.active[p.aqueous] ? evaluateAqueous(p, s.lambda, s.lnIonicStrength) : undefined;
+  const n = speciesAmounts(p, s, aqueous);
   const phases: StablePhase[] = [];
   const saturationIndices: Record<string, number> = {};
   const gasUptakeMol: Record<string, number> = {};
@@ -157,8 +159,8 @@ export function buildResult(
   let solution: EquilibriumResult["solution"] = null;
   let pH: number | null = null;
   let ionicStrength: number | null = null;
-  if (p.aqueous >= 0 && s.active[p.aqueous]) {
-    const aq = evaluateAqueous(p, s.lambda, s.lnIonicStrength);
+  if (aqueous) {
+    const aq = aqueous;
     const nE = p.elements.length;
     const elementMolality: Record<string, number> = {};
     const species: SolutionSpecies[] = [];

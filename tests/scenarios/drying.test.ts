@@ -1,10 +1,9 @@
 import { describe, it, expect } from "vitest";
-import { binderSystemFromInput } from "../../lib/cement/binder-system";
+import { typicalCemIPaste } from "./typical-cem-i-paste";
 import { hydrationFamilies } from "../../lib/data/hydration-states";
-import { loadDataset } from "../../lib/data/load-dataset";
 import { GAS_CONSTANT_J_PER_MOL_K } from "../../lib/equilibrium/problem";
 import { dryingScenario, familyTransitionRhPercent, hydrationStateMaps, type DryingScenario } from "../../lib/scenarios/drying";
-import { newWarmStartBook, readingBook, type ScenarioBase } from "../../lib/scenarios/sweep";
+import { newWarmStartBook, readingBook } from "../../lib/scenarios/sweep";
 import { exposureInput } from "../../lib/schema/exposure-input";
 
 /**
@@ -16,17 +15,8 @@ import { exposureInput } from "../../lib/schema/exposure-input";
  * and this scenario's map and bisection, not the data. The gypsum–anhydrite check and the temperature trend are not
  * built into the data that way.
  */
-const loaded = loadDataset();
-if (!loaded.ok) throw new Error(loaded.error.message);
-const dataset = loaded.value;
+const { dataset, base } = typicalCemIPaste();
 
-const system = binderSystemFromInput({
-  cement: { kind: "preset", presetId: "en197-cem-i" },
-  mix: { waterBinderRatio: 0.5, binderContentKgPerM3: 350 },
-  age: { mode: "age", ageDays: 28, curingTemperatureC: 20 },
-});
-if (!system.ok) throw new Error(JSON.stringify(system.error));
-const base: ScenarioBase = { composition: system.value.composition, temperatureC: 20, binderContentKgPerM3: 350, dataset };
 const smallMap = { relativeHumiditiesPercent: [2, 10, 50], temperaturesC: [20, 60] };
 
 function run(raw: Record<string, unknown>, points = 8): DryingScenario {

@@ -1,7 +1,6 @@
 import { describe, it, expect } from "vitest";
-import { binderSystemFromInput } from "../../lib/cement/binder-system";
+import { typicalCemIPaste } from "./typical-cem-i-paste";
 import { createRng } from "../../lib/advisory/random";
-import { loadDataset } from "../../lib/data/load-dataset";
 import { bookedPaste, linearDoses, newWarmStartBook, readingBook, recordPaste, sweepPaste, type ScenarioBase } from "../../lib/scenarios/sweep";
 import { supersaturatedSolid } from "../../lib/scenarios/temperature-history";
 import { sampleDataset } from "../../lib/service/perturbed-dataset";
@@ -11,16 +10,7 @@ import { sampleDataset } from "../../lib/service/perturbed-dataset";
  * change the minimum it reaches), not of the science: the reference is the same sweep without the book.
  * Paste: typical CEM I preset, w/b 0.5, 350 kg/m³, 28 days at 20 °C (typical, not a specific cement).
  */
-const loaded = loadDataset();
-if (!loaded.ok) throw new Error(loaded.error.message);
-const dataset = loaded.value;
-const system = binderSystemFromInput({
-  cement: { kind: "preset", presetId: "en197-cem-i" },
-  mix: { waterBinderRatio: 0.5, binderContentKgPerM3: 350 },
-  age: { mode: "age", ageDays: 28, curingTemperatureC: 20 },
-});
-if (!system.ok) throw new Error(JSON.stringify(system.error));
-const base: ScenarioBase = { composition: system.value.composition, temperatureC: 20, binderContentKgPerM3: 350, dataset };
+const { dataset, base } = typicalCemIPaste();
 /** Sodium sulfate taken up, mol per 100 g binder (with no water: a test path, not the scenario's). */
 const doses = linearDoses(0.02, 5);
 const addSulfate = (dose: number) => ({ addedElementsMol: { Na: 2 * dose, S: dose, O: 4 * dose } });

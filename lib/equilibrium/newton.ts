@@ -51,13 +51,19 @@ export type AqueousEvaluation = {
   dLnAwDI: number;
 };
 
-export function evaluateAqueous(p: EquilibriumProblem, lambda: Float64Array, lnIonicStrength: number): AqueousEvaluation {
+export function evaluateAqueous(
+  p: EquilibriumProblem,
+  lambda: Float64Array,
+  lnIonicStrength: number,
+  into?: AqueousEvaluation,
+): AqueousEvaluation {
   const nS = p.species.length;
   const nE = p.elements.length;
-  const molality = new Float64Array(nS);
-  const lnGamma = new Float64Array(nS);
-  const dLnGammaDI = new Float64Array(nS);
-  const dLnAwDMolality = new Float64Array(nS);
+  const st = p.stoich;
+  const molality = into ? into.molality.fill(0) : new Float64Array(nS);
+  const lnGamma = into ? into.lnGamma.fill(0) : new Float64Array(nS);
+  const dLnGammaDI = into ? into.dLnGammaDI.fill(0) : new Float64Array(nS);
+  const dLnAwDMolality = into ? into.dLnAwDMolality.fill(0) : new Float64Array(nS);
   const ionicStrength = Math.exp(lnIonicStrength);
   let totalMolality = 0;
   let chargedMolality = 0;
@@ -65,48 +71,57 @@ export function evaluateAqueous(p: EquilibriumProblem, lambda: Float64Array, lnI
   let sumMDc = 0;
   const classTerms: (SoluteActivityTerms | undefined)[] = new Array(p.activityTerms.length);
   if (p.aqueous >= 0) {
-    for (const i of p.phases[p.aqueous].species) {
+    const members = p.phases[p.aqueous].species;
+    for (let q = 0; q < members.length; q++) {
+      const i = members[q];
       if (i === p.water) continue;
-      const charge = p.species[i].charge;
+      const species = p.species[i];
       const k = p.activityClass[i];
       const terms = classTerms[k] ?? (classTerms[k] = p.activityTerms[k](ionicStrength));
-      const [lg, dlg, c, dc] = terms;
-      let t = -p.species[i].g - lg;
-      for (let j = 0; j < nE; j++) t += p.stoich[i * nE + j] * lambda[j];
+      const lg = terms[0];
+      const c = terms[2];
+      // Zero stoichiometric coefficients are skipped: adding 0·λ_j would not change the sum.
+      let t = -species.g - lg;
+      const nz = p.nonZero[i];
+      for (let x = 0; x < nz.length; x++) t += st[i * nE + nz[x]] * lambda[nz[x]];
       const m = safeExp(t);
       molality[i] = m;
       lnGamma[i] = lg;
-      dLnGammaDI[i] = dlg;
+      dLnGammaDI[i] = terms[1];
       dLnAwDMolality[i] = -WATER_MOLAR_MASS_KG_PER_MOL * c;
       sumMC += m * c;
-      sumMDc += m * dc;
+      sumMDc += m * terms[3];
       totalMolality += m;
-      if (charge !== 0) chargedMolality += m;
+      if (species.charge !== 0) chargedMolality += m;
     }
   }
   const lnWaterActivity = -WATER_MOLAR_MASS_KG_PER_MOL * sumMC;
   const dLnAwDI = -WATER_MOLAR_MASS_KG_PER_MOL * sumMDc;
+  if (into) {
+    into.ionicStrength = ionicStrength;
+    into.totalMolality = totalMolality;
+    into.chargedMolality = chargedMolality;
+    into.lnWaterActivity = lnWaterActivity;
+    into.dLnAwDI = dLnAwDI;
+    return into;
+  }
   return { ionicStrength, molality, lnGamma, dLnGammaDI, totalMolality, chargedMolality, lnWaterActivity, dLnAwDMolality, dLnAwDI };
 }
 
 /** exp(a_i·λ − g_i) for the members of a solid solution or gas phase. */
 export function memberTerms(p: EquilibriumProblem, phase: number, lambda: Float64Array): Float64Array {
-  const nE = p.elements.length;
   const members = p.phases[phase].species;
   const y = new Float64Array(members.length);
-  members.forEach((i, k) => {
-    let t = -p.species[i].g;
-    for (let j = 0; j < nE; j++) t += p.stoich[i * nE + j] * lambda[j];
-    y[k] = safeExp(t);
-  });
+  for (let k = 0; k < members.length; k++) y[k] = safeExp(speciesAffinity(p, members[k], lambda));
   return y;
 }
 
 /** a_i·λ − g_i of a species (its affinity of formation from the element potentials, in RT units). */
 export function speciesAffinity(p: EquilibriumProblem, i: number, lambda: Float64Array): number {
   const nE = p.elements.length;
+  const nz = p.nonZero[i];
   let t = -p.species[i].g;
-  for (let j = 0; j < nE; j++) t += p.stoich[i * nE + j] * lambda[j];
+  for (let x = 0; x < nz.length; x++) t += p.stoich[i * nE + nz[x]] * lambda[nz[x]];
   return t;
 }
 
@@ -134,54 +149,99 @@ type Assembly = {
   aq?: AqueousEvaluation;
 };
 
-function nonZero(p: EquilibriumProblem, i: number): Int32Array {
-  return p.nonZero[i];
+/**
+ * Buffers of one problem's Newton iterations, reused from iteration to iteration (an assembly is read
+ * before the next one is built: callers never keep two).
+ */
+type Workspace = {
+  matrix: Float64Array;
+  rhs: Float64Array;
+  F: Float64Array;
+  scale: Float64Array;
+  dHalfZ2mDLambda: Float64Array;
+  dLnAwDLambda: Float64Array;
+  aq: AqueousEvaluation;
+};
+/** Keyed by the stoichiometry array, which problems of one structure (one template) share. */
+const workspaces = new WeakMap<Float64Array, Workspace>();
+
+function workspaceOf(p: EquilibriumProblem): Workspace {
+  let w = workspaces.get(p.stoich);
+  if (!w) {
+    const nE = p.elements.length;
+    const nS = p.species.length;
+    const maxSize = nE + 1 + p.phases.length;
+    w = {
+      matrix: new Float64Array(maxSize * maxSize),
+      rhs: new Float64Array(maxSize),
+      F: new Float64Array(nE),
+      scale: new Float64Array(nE),
+      dHalfZ2mDLambda: new Float64Array(nE),
+      dLnAwDLambda: new Float64Array(nE),
+      aq: {
+        ionicStrength: 0,
+        molality: new Float64Array(nS),
+        lnGamma: new Float64Array(nS),
+        dLnGammaDI: new Float64Array(nS),
+        totalMolality: 0,
+        chargedMolality: 0,
+        lnWaterActivity: 0,
+        dLnAwDMolality: new Float64Array(nS),
+        dLnAwDI: 0,
+      },
+    };
+    workspaces.set(p.stoich, w);
+  }
+  return w;
 }
 
-/** Builds the Newton system J·Δ = −F for the present phases. */
+/**
+ * Builds the Newton system J·Δ = −F for the present phases. The matrix, right-hand side and aqueous
+ * evaluation returned live in the problem's workspace and are overwritten by the next call.
+ */
 export function assemble(p: EquilibriumProblem, s: SolverState): Assembly {
   const nE = p.elements.length;
   const st = p.stoich;
+  const w = workspaceOf(p);
   const activeList: number[] = [];
-  p.phases.forEach((_, k) => {
-    if (s.active[k]) activeList.push(k);
-  });
+  for (let k = 0; k < p.phases.length; k++) if (s.active[k]) activeList.push(k);
   const aqueousActive = p.aqueous >= 0 && s.active[p.aqueous] === 1;
   const lnICol = aqueousActive ? nE : -1;
   const base = nE + (aqueousActive ? 1 : 0);
   const size = base + activeList.length;
-  const matrix = new Float64Array(size * size);
-  const rhs = new Float64Array(size);
-  const F = new Float64Array(nE);
-  const scale = new Float64Array(nE);
-  const J = (r: number, c: number, v: number) => {
-    matrix[r * size + c] += v;
-  };
+  const matrix = w.matrix.fill(0, 0, size * size);
+  const rhs = w.rhs.fill(0, 0, size);
+  const F = w.F.fill(0);
+  const scale = w.scale.fill(0);
   let conditionResidual = 0;
   let aq: AqueousEvaluation | undefined;
 
-  activeList.forEach((phase, k) => {
+  for (let k = 0; k < activeList.length; k++) {
+    const phase = activeList[k];
     const col = base + k;
     const row = base + k;
     const kind = p.phases[phase].kind;
     const amount = s.amount[phase];
     if (kind === "aqueous") {
-      aq = evaluateAqueous(p, s.lambda, s.lnIonicStrength);
+      aq = evaluateAqueous(p, s.lambda, s.lnIonicStrength, w.aq);
       const I = aq.ionicStrength;
       let halfZ2m = 0;
-      const dHalfZ2mDLambda = new Float64Array(nE);
+      const dHalfZ2mDLambda = w.dHalfZ2mDLambda.fill(0);
       let halfZ2mGammaI = 0;
       // ∂ ln a_w/∂λ_l = Σ_i (∂ ln a_w/∂m_i) m_i a_il and ∂ ln a_w/∂ ln I through the molalities.
-      const dLnAwDLambda = new Float64Array(nE);
+      const dLnAwDLambda = w.dLnAwDLambda.fill(0);
       let dLnAwDLnIViaMolality = 0;
-      for (const i of p.phases[phase].species) {
+      const members = p.phases[phase].species;
+      for (let q = 0; q < members.length; q++) {
+        const i = members[q];
+        const nz = p.nonZero[i];
         if (i === p.water) {
-          for (let j = 0; j < nE; j++) {
+          for (let x = 0; x < nz.length; x++) {
+            const j = nz[x];
             const a = st[i * nE + j];
-            if (a === 0) continue;
             F[j] += (a * amount) / WATER_MOLAR_MASS_KG_PER_MOL;
             scale[j] += Math.abs(a * amount) / WATER_MOLAR_MASS_KG_PER_MOL;
-            J(j, col, a / WATER_MOLAR_MASS_KG_PER_MOL);
+            matrix[j * size + col] += a / WATER_MOLAR_MASS_KG_PER_MOL;
           }
           continue;
         }
@@ -190,9 +250,8 @@ export function assemble(p: EquilibriumProblem, s: SolverState): Assembly {
         const gI = aq.dLnGammaDI[i] * I; // d ln γ / d ln I
         halfZ2m += 0.5 * z * z * m;
         halfZ2mGammaI += 0.5 * z * z * m * gI;
-        const w = aq.dLnAwDMolality[i];
-        dLnAwDLnIViaMolality -= w * m * gI;
-        const nz = nonZero(p, i);
+        const wm = aq.dLnAwDMolality[i];
+        dLnAwDLnIViaMolality -= wm * m * gI;
         for (let x = 0; x < nz.length; x++) {
           const j = nz[x];
           const a = st[i * nE + j];
@@ -203,7 +262,7 @@ export function assemble(p: EquilibriumProblem, s: SolverState): Assembly {
           const weight = amount * a * m;
           for (let y = 0; y < nz.length; y++) matrix[j * size + nz[y]] += weight * st[i * nE + nz[y]];
           dHalfZ2mDLambda[j] += 0.5 * z * z * m * a;
-          dLnAwDLambda[j] += w * m * a;
+          dLnAwDLambda[j] += wm * m * a;
         }
       }
       // Ionic-strength row.
@@ -211,50 +270,52 @@ export function assemble(p: EquilibriumProblem, s: SolverState): Assembly {
       const gResidual = s.lnIonicStrength - Math.log(Math.max(halfZ2m, 1e-300));
       rhs[lnIRow] = -gResidual;
       conditionResidual = Math.max(conditionResidual, Math.abs(gResidual));
-      for (let l = 0; l < nE; l++) J(lnIRow, l, -dHalfZ2mDLambda[l] / halfZ2m);
-      J(lnIRow, lnICol, 1 + halfZ2mGammaI / halfZ2m);
+      for (let l = 0; l < nE; l++) matrix[lnIRow * size + l] += -dHalfZ2mDLambda[l] / halfZ2m;
+      matrix[lnIRow * size + lnICol] += 1 + halfZ2mGammaI / halfZ2m;
       // Water condition: a_w·λ − g_w − ln a_w = 0.
       const c = speciesAffinity(p, p.water, s.lambda) - aq.lnWaterActivity;
       rhs[row] = -c;
       conditionResidual = Math.max(conditionResidual, Math.abs(c));
-      for (let l = 0; l < nE; l++) J(row, l, st[p.water * nE + l] - dLnAwDLambda[l]);
-      J(row, lnICol, -(dLnAwDLnIViaMolality + aq.dLnAwDI * I));
+      for (let l = 0; l < nE; l++) matrix[row * size + l] += st[p.water * nE + l] - dLnAwDLambda[l];
+      matrix[row * size + lnICol] += -(dLnAwDLnIViaMolality + aq.dLnAwDI * I);
     } else if (kind === "solid-solution" || kind === "gas") {
       const members = p.phases[phase].species;
       const y = memberTerms(p, phase, s.lambda);
       let sum = 0;
       for (const v of y) sum += v;
-      members.forEach((i, q) => {
-        const nz = nonZero(p, i);
+      for (let q = 0; q < members.length; q++) {
+        const i = members[q];
+        const nz = p.nonZero[i];
         for (let x = 0; x < nz.length; x++) {
           const j = nz[x];
           const a = st[i * nE + j];
           F[j] += a * amount * y[q];
           scale[j] += Math.abs(a * amount * y[q]);
           matrix[j * size + col] += a * y[q];
-          const w = amount * a * y[q];
-          for (let v = 0; v < nz.length; v++) matrix[j * size + nz[v]] += w * st[i * nE + nz[v]];
+          const wq = amount * a * y[q];
+          for (let v = 0; v < nz.length; v++) matrix[j * size + nz[v]] += wq * st[i * nE + nz[v]];
           matrix[row * size + j] += (y[q] * a) / sum;
         }
-      });
+      }
       const c = Math.log(sum);
       rhs[row] = -c;
       conditionResidual = Math.max(conditionResidual, Math.abs(c));
     } else {
       const i = p.phases[phase].species[0];
-      for (let j = 0; j < nE; j++) {
+      const nz = p.nonZero[i];
+      for (let x = 0; x < nz.length; x++) {
+        const j = nz[x];
         const a = st[i * nE + j];
-        if (a === 0) continue;
         F[j] += a * amount;
         scale[j] += Math.abs(a * amount);
-        J(j, col, a);
-        J(row, j, a);
+        matrix[j * size + col] += a;
+        matrix[row * size + j] += a;
       }
       const c = speciesAffinity(p, i, s.lambda);
       rhs[row] = -c;
       conditionResidual = Math.max(conditionResidual, Math.abs(c));
     }
-  });
+  }
 
   let balanceResidual = 0;
   let unsupportedElement: number | undefined;
@@ -294,11 +355,11 @@ export function solveFixedPhases(p: EquilibriumProblem, s: SolverState, o: Newto
     if ((a.balanceResidual <= o.balanceTolerance && a.conditionResidual <= o.conditionTolerance) || stalledAtRoundOff)
       return { converged: true, iterations: iteration, balanceResidual: a.balanceResidual, conditionResidual: a.conditionResidual, singular: false };
     if (iteration === o.maxIterations || performance.now() > o.deadline) break;
-    let delta = a.rhs.slice();
-    if (!solveInPlace(a.matrix.slice(), delta, a.size)) {
+    let delta = a.rhs.slice(0, a.size);
+    if (!solveInPlace(a.matrix.slice(0, a.size * a.size), delta, a.size)) {
       // Element potentials not fixed by the present phases (a dry solid assemblage with fewer phases than
       // elements leaves directions of λ free): regularise the λ block (Tikhonov) for a near least-norm step.
-      delta = a.rhs.slice();
+      delta = a.rhs.slice(0, a.size);
       const m = a.matrix;
       for (let j = 0; j < nE; j++) {
         let rowMax = 0;
@@ -351,9 +412,12 @@ function stepLength(p: EquilibriumProblem, s: SolverState, delta: Float64Array, 
     const kind = p.phases[phase].kind;
     if (kind === "pure-solid" || kind === "reservoir") continue;
     const y = kind === "aqueous" ? undefined : memberTerms(p, phase, s.lambda);
-    p.phases[phase].species.forEach((i, q) => {
+    const members = p.phases[phase].species;
+    for (let q = 0; q < members.length; q++) {
+      const i = members[q];
+      const nz = p.nonZero[i];
       let change = 0;
-      for (let j = 0; j < nE; j++) change += p.stoich[i * nE + j] * delta[j];
+      for (let x = 0; x < nz.length; x++) change += p.stoich[i * nE + nz[x]] * delta[nz[x]];
       let abundance: number;
       if (kind === "aqueous") {
         if (i === p.water) abundance = 1;
@@ -365,7 +429,7 @@ function stepLength(p: EquilibriumProblem, s: SolverState, delta: Float64Array, 
       const magnitude = Math.abs(change);
       if (abundance > 1e-10 && magnitude > major) major = magnitude;
       if (magnitude > any) any = magnitude;
-    });
+    }
   }
   let alpha = 1;
   if (major > MAX_LN_STEP_MAJOR) alpha = Math.min(alpha, MAX_LN_STEP_MAJOR / major);

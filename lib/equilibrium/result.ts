@@ -108,17 +108,22 @@ export function speciesAmounts(p: EquilibriumProblem, s: SolverState, evaluated?
 /** Largest relative element-balance residual of a state (reservoir exchange counted). */
 export function balanceResidual(p: EquilibriumProblem, n: Float64Array): number {
   const nE = p.elements.length;
+  const sum = new Float64Array(nE);
+  const scale = new Float64Array(nE);
+  // Species in order for every element, zero coefficients skipped (they add nothing).
+  for (let i = 0; i < p.species.length; i++) {
+    const nz = p.nonZero[i];
+    for (let x = 0; x < nz.length; x++) {
+      const j = nz[x];
+      const term = p.stoich[i * nE + j] * n[i];
+      sum[j] += term;
+      scale[j] += Math.abs(term);
+    }
+  }
   let worst = 0;
   for (let j = 0; j < nE; j++) {
-    let sum = 0;
-    let scale = 0;
-    for (let i = 0; i < p.species.length; i++) {
-      const term = p.stoich[i * nE + j] * n[i];
-      sum += term;
-      scale += Math.abs(term);
-    }
-    const denominator = Math.max(p.totals[j], scale, 1e-300);
-    worst = Math.max(worst, Math.abs(sum - p.totals[j]) / denominator);
+    const denominator = Math.max(p.totals[j], scale[j], 1e-300);
+    worst = Math.max(worst, Math.abs(sum[j] - p.totals[j]) / denominator);
   }
   return worst;
 }
@@ -171,10 +176,12 @@ export function buildResult(
       }
       const m = aq.molality[i];
       species.push({ name: p.species[i].id, molality: m, activity: m * Math.exp(aq.lnGamma[i]) });
-      for (let j = 0; j < nE; j++) {
+      const nz = p.nonZero[i];
+      for (let x = 0; x < nz.length; x++) {
+        const j = nz[x];
         if (j === p.chargeRow) continue;
         const a = p.stoich[i * nE + j];
-        if (a !== 0) elementMolality[p.elements[j]] = (elementMolality[p.elements[j]] ?? 0) + a * m;
+        elementMolality[p.elements[j]] = (elementMolality[p.elements[j]] ?? 0) + a * m;
       }
     }
     species.sort((x, y) => y.molality - x.molality);

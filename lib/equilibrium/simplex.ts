@@ -35,6 +35,9 @@ export function solveLinearProgram(
   const eps = 1e-11;
   let iterations = 0;
 
+  // Reduced costs r_j = c_j − c_B·column_j of the current cost vector, kept up to date by each pivot
+  // (a row operation like the constraint rows) instead of being recomputed from the tableau every iteration.
+  const reduced = new Float64Array(n + m);
   const pivot = (row: number, col: number) => {
     const p = t[row * width + col];
     for (let j = 0; j < width; j++) t[row * width + j] /= p;
@@ -48,21 +51,30 @@ export function solveLinearProgram(
       }
       t[i * width + col] = 0;
     }
+    const f = reduced[col];
+    if (f !== 0) {
+      for (let j = 0; j < n + m; j++) {
+        const v = t[row * width + j];
+        if (v !== 0) reduced[j] -= f * v;
+      }
+      reduced[col] = 0;
+    }
     basis[row] = col;
   };
 
   // Runs the simplex for a cost vector over the first `allowed` columns; returns false on the limit.
-  const costBasis = new Float64Array(m);
   const optimise = (cost: Float64Array, allowed: number): boolean => {
+    for (let j = 0; j < n + m; j++) {
+      let r = cost[j];
+      for (let i = 0; i < m; i++) r -= cost[basis[i]] * t[i * width + j];
+      reduced[j] = r;
+    }
     for (;;) {
       if (++iterations > maxIterations) return false;
-      for (let i = 0; i < m; i++) costBasis[i] = cost[basis[i]];
-      // Reduced costs r_j = c_j − c_B·column_j; Bland: first improving column enters.
+      // Bland: the first improving column enters.
       let entering = -1;
       for (let j = 0; j < allowed; j++) {
-        let r = cost[j];
-        for (let i = 0; i < m; i++) r -= costBasis[i] * t[i * width + j];
-        if (r < -eps * (1 + Math.abs(cost[j]))) {
+        if (reduced[j] < -eps * (1 + Math.abs(cost[j]))) {
           entering = j;
           break;
         }

@@ -169,11 +169,26 @@ export function buildProblem(input: ProblemInput): EquilibriumOutcome<Equilibriu
   };
 }
 
+type ActivityClasses = Pick<EquilibriumProblem, "activityClass" | "activityTerms">;
+/** Activity classes by species list (one per template) and activity model: both are reused across calls. */
+const activityClassCache = new WeakMap<readonly ProblemSpecies[], WeakMap<AqueousActivityModel, ActivityClasses>>();
+
 /** Groups the solutes by the activity model's parameter key and resolves each class's terms once. */
-function activityClasses(
-  problem: Pick<EquilibriumProblem, "species" | "aqueous" | "water">,
-  activity: AqueousActivityModel,
-): Pick<EquilibriumProblem, "activityClass" | "activityTerms"> {
+function activityClasses(problem: Pick<EquilibriumProblem, "species" | "aqueous" | "water">, activity: AqueousActivityModel): ActivityClasses {
+  let byModel = activityClassCache.get(problem.species);
+  if (!byModel) {
+    byModel = new WeakMap();
+    activityClassCache.set(problem.species, byModel);
+  }
+  let classes = byModel.get(activity);
+  if (!classes) {
+    classes = groupActivityClasses(problem, activity);
+    byModel.set(activity, classes);
+  }
+  return classes;
+}
+
+function groupActivityClasses(problem: Pick<EquilibriumProblem, "species" | "aqueous" | "water">, activity: AqueousActivityModel): ActivityClasses {
   const activityClass = new Int32Array(problem.species.length).fill(-1);
   const activityTerms: EquilibriumProblem["activityTerms"] = [];
   const byKey = new Map<string, number>();

@@ -34,7 +34,7 @@ export type HydrateOutput = {
 };
 
 /** Validates unknown phase ids against the data set, naming the field. */
-function unknownPhase(ids: readonly string[], field: string, known: Set<string>) {
+function unknownPhase(ids: readonly string[], field: string, known: ReadonlySet<string>) {
   const index = ids.findIndex((id) => !known.has(id));
   return index < 0 ? undefined : { path: `${field}[${index}]`, message: `unknown phase id "${ids[index]}"` };
 }

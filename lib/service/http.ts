@@ -127,12 +127,16 @@ export async function readJsonBody(request: Request, limitBytes = DEFAULT_BODY_L
 export type TimeLimited<T> = { ok: true; value: T } | { ok: false; elapsedMs: number };
 
 /**
- * Runs `work` with an AbortSignal that fires after `limitMs`; resolves to `{ ok: false }` as soon as the
- * limit passes, even if the work ignores the signal. Synchronous engine calls cannot be pre-empted in one
- * thread: they carry their own iteration and time caps (e.g. `timeLimitMs` of the equilibrium input).
+ * Runs `work` with an AbortSignal that fires after `limitMs`, or when `outer` aborts (the request's signal:
+ * the client went away); resolves to `{ ok: false }` as soon as the limit passes, even if the work ignores the
+ * signal. Synchronous engine calls cannot be pre-empted in one thread: they carry their own iteration and
+ * time caps (e.g. `timeLimitMs` of the equilibrium input); work in a worker thread is stopped by the signal.
  */
-export async function withTimeLimit<T>(work: (signal: AbortSignal) => Promise<T> | T, limitMs: number): Promise<TimeLimited<T>> {
+export async function withTimeLimit<T>(work: (signal: AbortSignal) => Promise<T> | T, limitMs: number, outer?: AbortSignal): Promise<TimeLimited<T>> {
   const controller = new AbortController();
+  const abortOnOuter = () => controller.abort();
+  if (outer?.aborted) controller.abort();
+  else outer?.addEventListener("abort", abortOnOuter, { once: true });
   const started = Date.now();
   let timer: ReturnType<typeof setTimeout> | undefined;
   const expired = new Promise<TimeLimited<T>>((resolve) => {
@@ -146,6 +150,7 @@ export async function withTimeLimit<T>(work: (signal: AbortSignal) => Promise<T>
     return await Promise.race([running, expired]);
   } finally {
     clearTimeout(timer);
+    outer?.removeEventListener("abort", abortOnOuter);
   }
 }
 
@@ -193,7 +198,7 @@ export type ComputationOptions = { limitBytes?: number; timeLimitMs?: number; lo
 
 /**
  * A POST route for one computation: reads the JSON body (size-limited), runs the service function
- * under the time limit, and maps its outcome to a response.
+ * under the time limit (its signal also aborts when the client disconnects), and maps its outcome to a response.
  */
 export function jsonComputation<T>(
   compute: (body: unknown, signal: AbortSignal) => ServiceOutcome<T> | Promise<ServiceOutcome<T>>,
@@ -204,7 +209,7 @@ export function jsonComputation<T>(
   return guarded(async (request) => {
     const body = await readJsonBody(request, limitBytes);
     if (!body.ok) return body.response;
-    const outcome = await withTimeLimit((signal) => compute(body.value, signal), timeLimitMs);
+    const outcome = await withTimeLimit((signal) => compute(body.value, signal), timeLimitMs, request.signal);
     if (!outcome.ok) return timeLimitResponse(timeLimitMs);
     return outcomeResponse(outcome.value);
   }, options.log);

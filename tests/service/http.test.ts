@@ -98,6 +98,21 @@ describe("jsonComputation", () => {
     expect(JSON.parse(lines[0])).toMatchObject({ level: "error", requestId: body.requestId, method: "POST", path: "/api/v1/x", message: "secret internal detail" });
   });
 
+  it("aborts the computation's signal when the request's signal aborts (the client went away)", async () => {
+    const client = new AbortController();
+    let computeSignal: AbortSignal | undefined;
+    const route = jsonComputation((_body, signal) => {
+      computeSignal = signal;
+      client.abort();
+      return signal.aborted ? domainError("cancelled", "stopped") : { ok: true, value: "ran on" };
+    }, { timeLimitMs: 10_000 });
+    const request = new Request("http://localhost/api/v1/x", { method: "POST", body: "{}", signal: client.signal });
+    const response = await route(request, ctx);
+    expect(computeSignal?.aborted).toBe(true);
+    expect(response.status).toBe(409);
+    expect(await response.json()).toMatchObject({ error: "cancelled" });
+  });
+
   it("passes the parsed body to the service and its value back as 200 JSON", async () => {
     const route = jsonComputation((body) => ({ ok: true, value: { echoed: body } }));
     const response = await route(post('{"x":[1,2]}'), ctx);

@@ -1,26 +1,51 @@
-// The entry of a job's worker thread (lib/service/worker-job-runner.ts). It stays outside the Next bundle:
-// the server starts it by path, and it loads the TypeScript module named in `workerData` with tsx (a runtime
-// dependency, the same loader the CLI runs on), so the worker runs the very source the tests check.
+// The entry of a computation's worker thread: a job's own worker (lib/service/worker-job-runner.ts) or a
+// long-lived worker of the computation pool (lib/service/computation-pool.ts). It stays outside the Next
+// bundle: the server starts it by path, and it loads the TypeScript module named in `workerData` with tsx (a
+// runtime dependency, the same loader the CLI runs on), so the worker runs the very source the tests check.
 // Plain CommonJS because a worker entry must be a file Node can run without a loader.
 "use strict";
 
 const { parentPort, workerData } = require("node:worker_threads");
 const { require: requireTypeScript } = require("tsx/cjs/api");
 
-/** Messages to the main thread: `{ type: "progress", fraction }`, then one `{ type: "outcome", outcome }` or `{ type: "error", message }`. */
 function post(message) {
   parentPort.postMessage(message);
 }
 
-async function main() {
+/** Only the message crosses to the main thread, never the stack. */
+const messageOf = (caught) => (caught instanceof Error ? caught.message : String(caught));
+
+/** The module's function, loaded on first use (a pool worker keeps it, with the data set it loads, for later requests). */
+let loadedRun;
+function computation() {
+  if (loadedRun) return loadedRun;
   const loaded = requireTypeScript(workerData.modulePath, __filename);
   const run = loaded[workerData.exportName];
   if (typeof run !== "function") throw new Error(`${workerData.modulePath} has no function ${workerData.exportName}`);
-  const outcome = await run(workerData.raw, { onProgress: (fraction) => post({ type: "progress", fraction }) });
+  loadedRun = run;
+  return run;
+}
+
+/** A job: one computation of `workerData.raw`; messages `{ type: "progress", fraction }`, then one `{ type: "outcome", outcome }` or `{ type: "error", message }`. */
+async function runJob() {
+  const outcome = await computation()(workerData.raw, { onProgress: (fraction) => post({ type: "progress", fraction }) });
   post({ type: "outcome", outcome });
 }
 
-main().catch((caught) => {
-  // Only the message crosses to the main thread, never the stack.
-  post({ type: "error", message: caught instanceof Error ? caught.message : String(caught) });
-});
+/**
+ * A pool worker: computes each `{ id, raw }` it is sent, one at a time, and answers with the same messages
+ * carrying the request's `id`. A failure (or an outcome that cannot cross threads) answers only that request.
+ */
+function servePool() {
+  parentPort.on("message", async ({ id, raw }) => {
+    try {
+      const outcome = await computation()(raw, { onProgress: (fraction) => post({ type: "progress", id, fraction }) });
+      post({ type: "outcome", id, outcome });
+    } catch (caught) {
+      post({ type: "error", id, message: messageOf(caught) });
+    }
+  });
+}
+
+if (workerData.mode === "pool") servePool();
+else runJob().catch((caught) => post({ type: "error", message: messageOf(caught) }));

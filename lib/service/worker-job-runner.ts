@@ -35,7 +35,20 @@ export function projectRoot(): string {
 // Not traced by the bundler: these files are run from the project directory, never copied into the build.
 const fromRoot = (path: string) => (isAbsolute(path) ? path : join(/*turbopackIgnore: true*/ projectRoot(), path));
 
-/** Workers started and not yet exited (for the tests and the health of the process). */
+export type WorkerFiles = { ok: true; bootstrap: string; modulePath: string } | { ok: false; missingPath: string };
+
+/** The bootstrap and the module of a worker, as absolute paths, or the first of them that is missing. */
+export function resolveWorkerFiles(module: WorkerModule): WorkerFiles {
+  const bootstrap = fromRoot(BOOTSTRAP_PATH);
+  const modulePath = fromRoot(module.modulePath);
+  for (const path of [bootstrap, modulePath]) if (!existsSync(path)) return { ok: false, missingPath: path };
+  return { ok: true, bootstrap, modulePath };
+}
+
+/** The message of a missing worker file, with the remedy. */
+export const missingFileMessage = (path: string) => `the job worker's file ${path} is missing (set HYDRASTATE_ROOT to the project directory)`;
+
+/** Job workers started and not yet exited (for the tests and the health of the process; the computation pool counts its own). */
 const liveWorkers = new Set<Worker>();
 
 export function liveWorkerCount(): number {
@@ -49,12 +62,10 @@ export function workerJobRunner<T>(module: WorkerModule): JobRunner<T> {
   return (raw, { signal, onProgress }) =>
     new Promise<ServiceOutcome<T>>((resolve, reject) => {
       if (signal.aborted) return resolve(domainError("cancelled", "cancelled before the worker started"));
-      const bootstrap = fromRoot(BOOTSTRAP_PATH);
-      const modulePath = fromRoot(module.modulePath);
-      for (const path of [bootstrap, modulePath])
-        if (!existsSync(path)) return reject(new WorkerJobError(`the job worker's file ${path} is missing (set HYDRASTATE_ROOT to the project directory)`));
+      const files = resolveWorkerFiles(module);
+      if (!files.ok) return reject(new WorkerJobError(missingFileMessage(files.missingPath)));
 
-      const worker = new Worker(bootstrap, { workerData: { modulePath, exportName: module.exportName, raw } });
+      const worker = new Worker(files.bootstrap, { workerData: { modulePath: files.modulePath, exportName: module.exportName, raw } });
       liveWorkers.add(worker);
       let settled = false;
       const settle = (finish: () => void) => {

@@ -1,0 +1,44 @@
+import type { AssessmentResult } from "./assess";
+import { assessmentWorkerModule } from "./assess-jobs";
+import { createComputationPool, POOL_SIZE_LIMITS, type ComputationPool } from "./computation-pool";
+
+/** The environment variable that sets the number of pool workers for `POST /api/v1/assess`. */
+export const ASSESS_WORKERS_ENV = "HYDRASTATE_ASSESS_WORKERS";
+/** Default pool workers: one, leaving the second core of the 2-core service machines to the job workers and the server. */
+export const DEFAULT_ASSESS_WORKERS = 1;
+
+export type PoolSizeError = { code: "invalid_pool_size"; field: typeof ASSESS_WORKERS_ENV; value: string; min: number; max: number };
+
+/** The pool size from the environment's text: unset or empty gives the default; anything but an integer in the limits is an error. */
+export function assessWorkersFrom(text: string | undefined): { ok: true; value: number } | { ok: false; error: PoolSizeError } {
+  if (text === undefined || text.trim() === "") return { ok: true, value: DEFAULT_ASSESS_WORKERS };
+  const value = Number(text);
+  if (Number.isInteger(value) && value >= POOL_SIZE_LIMITS.min && value <= POOL_SIZE_LIMITS.max) return { ok: true, value };
+  return { ok: false, error: { code: "invalid_pool_size", field: ASSESS_WORKERS_ENV, value: text, ...POOL_SIZE_LIMITS } };
+}
+
+/**
+ * The process-wide pool that computes `POST /api/v1/assess` (`runAssessment` of `lib/service/assess.ts`, as the
+ * assessment jobs), on `globalThis` so that a reloaded route module finds the workers already started. An
+ * invalid `HYDRASTATE_ASSESS_WORKERS` is reported in one log line and the default is used.
+ */
+const key = Symbol.for("hydrastate.assessmentPool");
+type Holder = { [key]?: ComputationPool<AssessmentResult> };
+
+export function assessmentPool(): ComputationPool<AssessmentResult> {
+  const holder = globalThis as Holder;
+  if (!holder[key]) {
+    const size = assessWorkersFrom(process.env[ASSESS_WORKERS_ENV]);
+    if (!size.ok) console.error(JSON.stringify({ level: "warn", ...size.error, using: DEFAULT_ASSESS_WORKERS }));
+    holder[key] = createComputationPool<AssessmentResult>(assessmentWorkerModule, { size: size.ok ? size.value : DEFAULT_ASSESS_WORKERS });
+  }
+  return holder[key];
+}
+
+/** Replaces the pool (tests); returns the previous one, which the caller closes. */
+export function setAssessmentPool(pool: ComputationPool<AssessmentResult> | undefined): ComputationPool<AssessmentResult> | undefined {
+  const holder = globalThis as Holder;
+  const previous = holder[key];
+  holder[key] = pool;
+  return previous;
+}

@@ -1,0 +1,17 @@
+import { describe, expect, it } from "vitest";
+import { ASSESS_WORKERS_ENV, assessWorkersFrom, DEFAULT_ASSESS_WORKERS } from "../../lib/service/assess-pool";
+
+describe("the assessment pool's size from HYDRASTATE_ASSESS_WORKERS", () => {
+  it("is the default when unset or empty, and the integer given within the limits", () => {
+    expect(DEFAULT_ASSESS_WORKERS).toBe(1);
+    expect(assessWorkersFrom(undefined)).toEqual({ ok: true, value: 1 });
+    expect(assessWorkersFrom(" ")).toEqual({ ok: true, value: 1 });
+    expect(assessWorkersFrom("2")).toEqual({ ok: true, value: 2 });
+    expect(assessWorkersFrom("16")).toEqual({ ok: true, value: 16 });
+  });
+
+  it("is a typed error naming the variable and its limits for anything else", () => {
+    for (const text of ["0", "17", "1.5", "two", "-1"])
+      expect(assessWorkersFrom(text)).toEqual({ ok: false, error: { code: "invalid_pool_size", field: ASSESS_WORKERS_ENV, value: text, min: 1, max: 16 } });
+  });
+});

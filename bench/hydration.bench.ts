@@ -3,7 +3,10 @@ import { hydrationTimeline } from "../lib/cement/hydration-timeline";
 import { loadDataset } from "../lib/data/load-dataset";
 import { medianMs } from "./timing";
 
-/** A 40-age timeline (1 hour to 10 years) for a slag-blended cement, warm-started point to point. Target < 100 ms. */
+/**
+ * A 40-age timeline (1 hour to 10 years) for a slag-blended cement, warm-started point to point. Target < 100 ms.
+ * The median is taken after five unmeasured timelines (JIT warm-up); the first timeline of the process is reported apart.
+ */
 export async function run(): Promise<Record<string, unknown>> {
   const dataset = loadDataset();
   if (!dataset.ok) throw new Error(dataset.error.message);
@@ -19,5 +22,8 @@ export async function run(): Promise<Record<string, unknown>> {
     if (!r.ok) throw new Error(`timeline failed: ${JSON.stringify(r.error)}`);
     return r;
   };
-  return { timeline40MedianMs: medianMs(timeline, 10, 2), targetMs: 100 };
+  const firstStart = performance.now();
+  timeline();
+  const firstTimelineMs = performance.now() - firstStart;
+  return { firstTimelineMs, timeline40MedianMs: medianMs(timeline, 20, 5), targetMs: 100 };
 }

@@ -50,10 +50,13 @@ export type EquilibriumResult = {
 export type SerializedState = {
   elements: string[];
   phases: string[];
+  /** Element potentials μ_j/RT at `temperatureK`. */
   lambda: number[];
   amount: number[];
   active: number[];
   lnIonicStrength: number;
+  /** Temperature of the state, K (states saved before it was recorded lack it). */
+  temperatureK?: number;
 };
 
 export function serializeState(p: EquilibriumProblem, s: SolverState): SerializedState {
@@ -64,16 +67,23 @@ export function serializeState(p: EquilibriumProblem, s: SolverState): Serialize
     amount: Array.from(s.amount),
     active: Array.from(s.active),
     lnIonicStrength: s.lnIonicStrength,
+    temperatureK: p.temperatureK,
   };
 }
 
-/** Maps a serialized state onto a (possibly different) problem by element and phase names. */
+/**
+ * Maps a serialized state onto a (possibly different) problem by element and phase names. A state saved at
+ * another temperature keeps its element potentials in J/mol (λ scaled by T_saved/T): the potentials change far
+ * less with temperature than μ/RT does, since μ°/RT of a hydrate of ΔfG° ≈ −15 MJ/mol moves by about 200 units
+ * between 20 and 10 °C, and unscaled λ would start Newton's method with species amounts off by as many e-folds.
+ */
 export function deserializeState(p: EquilibriumProblem, saved: SerializedState): SolverState | undefined {
   const lambda = new Float64Array(p.elements.length);
+  const scale = saved.temperatureK !== undefined && saved.temperatureK > 0 ? saved.temperatureK / p.temperatureK : 1;
   for (let j = 0; j < p.elements.length; j++) {
     const at = saved.elements.indexOf(p.elements[j]);
     if (at < 0) return undefined;
-    lambda[j] = saved.lambda[at];
+    lambda[j] = saved.lambda[at] * scale;
   }
   const amount = new Float64Array(p.phases.length);
   const active = new Uint8Array(p.phases.length);

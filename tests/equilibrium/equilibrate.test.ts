@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { equilibrate } from "../../lib/equilibrium/equilibrate";
-import type { EquilibriumResult } from "../../lib/equilibrium/result";
+import { componentTotals, equilibrate, equilibrateSystem } from "../../lib/equilibrium/equilibrate";
+import type { EquilibriumResult, SerializedState } from "../../lib/equilibrium/result";
+import { loadDataset } from "../../lib/data/load-dataset";
 import { expectEquilibriumInvariants } from "./invariants";
 import { expectReference } from "../support/reference-check";
 
@@ -199,5 +200,43 @@ describe("equilibrate: inputs and failures", () => {
     if (!next.ok) throw new Error();
     expect(next.value.warmStarted).toBe(true);
     expect(next.value.pH!).toBeCloseTo(cold.pH!, 9);
+  });
+});
+
+describe("equilibrateSystem: warm start from another temperature", () => {
+  // A hydrated-cement-like system in 12 elements (the benchmark's). The state saved at 20 °C records its temperature, and
+  // its element potentials are carried over in J/mol: without that, μ°/RT of the hydrates moves by hundreds of units
+  // between 20 and 10 °C and the warm Newton iteration starts singular (then the search falls back to a cold start).
+  const loaded = loadDataset();
+  if (!loaded.ok) throw new Error(loaded.error.message);
+  const totals = componentTotals({ H2O: 27.75, CaO: 1.1, SO3: 0.03, CO2: 0.01, Na2O: 0.003, K2O: 0.006, HCl: 0.001, SiO2: 0.34, Al2O3: 0.05, MgO: 0.04, Fe2O3: 0.018 }, "mol");
+  if (!totals.ok) throw new Error("bad components");
+  const at = (temperatureC: number, warmStart?: SerializedState) => {
+    const r = equilibrateSystem({ temperatureC, elementTotalsMol: totals.value, dataset: loaded.value, warmStart });
+    if (!r.ok) throw new Error(JSON.stringify(r.error));
+    return r.value;
+  };
+  const at20 = at(20);
+
+  it("records the temperature of the state", () => {
+    expect(at20.state.temperatureK).toBeCloseTo(293.15, 9);
+  });
+
+  it("stays warm from 20 to 10 °C and 35 °C and reaches the cold-start equilibrium", () => {
+    for (const temperatureC of [10, 35]) {
+      const warm = at(temperatureC, at20.state);
+      const cold = at(temperatureC);
+      expect(warm.warmStarted).toBe(true);
+      expect(warm.phases.map((p) => p.id).sort()).toEqual(cold.phases.map((p) => p.id).sort());
+      expect(warm.pH!).toBeCloseTo(cold.pH!, 8);
+      expect(Math.abs(warm.gibbsEnergyJ - cold.gibbsEnergyJ)).toBeLessThan(1e-6 * Math.abs(cold.gibbsEnergyJ));
+    }
+  });
+
+  it("still accepts a state without a temperature (saved before it was recorded) at the state's own temperature", () => {
+    const { temperatureK: _omitted, ...legacy } = at20.state;
+    const again = at(20, legacy);
+    expect(again.warmStarted).toBe(true);
+    expect(again.pH!).toBeCloseTo(at20.pH!, 9);
   });
 });

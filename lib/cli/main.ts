@@ -33,12 +33,17 @@ async function main(argv: string[]): Promise<number> {
   return command.run(rest);
 }
 
+// The exit code is set, not forced with process.exit(): the process ends when standard output has drained. Forcing it
+// cut piped output at 64 KiB when the CLI runs under the tsx launcher (`npm run cli -- hydrate ... | jq`), which relays
+// the output of its child process through a pipe.
 main(process.argv.slice(2)).then(
-  (code) => process.exit(code),
+  (code) => {
+    process.exitCode = code;
+  },
   (error: unknown) => {
     // A bug, not a user error: say so in one line; the stack goes only to a debug run.
     process.stderr.write(`internal error: ${error instanceof Error ? error.message : String(error)}\n`);
     if (process.env.HYDRASTATE_DEBUG) console.error(error);
-    process.exit(70);
+    process.exitCode = 70;
   },
 );

@@ -30,6 +30,15 @@ describe("cli hydrate", () => {
     expect(r.warnings.map((w: { code: string }) => w.code)).toContain("scm_model_extrapolated");
   });
 
+  it("prints the whole JSON into a shell pipe under the tsx launcher that `npm run cli` uses (output above 64 KiB)", () => {
+    // Regression: the exit was forced with process.exit(), which cut the output at 65 536 bytes in `npm run cli -- hydrate
+    // ... | jq` (a real pipe; the socket pair that spawnSync gives a child did not show it).
+    const run = spawnSync("sh", ["-c", "node_modules/.bin/tsx lib/cli/main.ts hydrate --input - | cat"], { input: JSON.stringify(blended), encoding: "utf8", timeout: 120_000, maxBuffer: 1e8 });
+    expect(run.status).toBe(0);
+    expect(run.stdout.length).toBeGreaterThan(65_536);
+    expect(JSON.parse(run.stdout).timeline).toHaveLength(40);
+  });
+
   it("exits 2 naming the field and its limit on bad input", () => {
     const out = cli({ ...blended, mix: { waterBinderRatio: 0.95, binderContentKgPerM3: 360 } });
     expect(out.code).toBe(2);

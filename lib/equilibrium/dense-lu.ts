@@ -8,6 +8,7 @@
  * a largest entry of 1), which is how the solver detects a phase set that violates the phase rule.
  */
 export function solveInPlace(matrix: Float64Array, rhs: Float64Array, n: number, singularTolerance = 1e-12): boolean {
+  const columns = columnBuffer(n);
   for (let i = 0; i < n; i++) {
     let rowMax = 0;
     for (let j = 0; j < n; j++) rowMax = Math.max(rowMax, Math.abs(matrix[i * n + j]));
@@ -38,11 +39,18 @@ export function solveInPlace(matrix: Float64Array, rhs: Float64Array, n: number,
       rhs[pivotRow] = t;
     }
     const pivot = matrix[k * n + k];
+    // The Newton matrices are sparse (a pure solid's row has its few elements only): eliminate with the pivot row's
+    // non-zero entries alone (subtracting factor·0 would change nothing).
+    let count = 0;
+    for (let j = k + 1; j < n; j++) if (matrix[k * n + j] !== 0) columns[count++] = j;
     for (let i = k + 1; i < n; i++) {
       const factor = matrix[i * n + k] / pivot;
       if (factor === 0) continue;
       matrix[i * n + k] = 0;
-      for (let j = k + 1; j < n; j++) matrix[i * n + j] -= factor * matrix[k * n + j];
+      for (let c = 0; c < count; c++) {
+        const j = columns[c];
+        matrix[i * n + j] -= factor * matrix[k * n + j];
+      }
       rhs[i] -= factor * rhs[k];
     }
   }
@@ -53,4 +61,11 @@ export function solveInPlace(matrix: Float64Array, rhs: Float64Array, n: number,
   }
   for (let i = 0; i < n; i++) if (!Number.isFinite(rhs[i])) return false;
   return true;
+}
+
+let sharedColumns = new Int32Array(64);
+/** Scratch space for the column indices of one pivot row (grown when a larger matrix comes). */
+function columnBuffer(n: number): Int32Array {
+  if (sharedColumns.length < n) sharedColumns = new Int32Array(2 * n);
+  return sharedColumns;
 }

@@ -156,6 +156,9 @@ type Assembly = {
 type Workspace = {
   matrix: Float64Array;
   rhs: Float64Array;
+  /** The LU factors of the matrix and the Newton step, for `solveFixedPhases`. */
+  factors: Float64Array;
+  delta: Float64Array;
   F: Float64Array;
   scale: Float64Array;
   dHalfZ2mDLambda: Float64Array;
@@ -174,6 +177,8 @@ function workspaceOf(p: EquilibriumProblem): Workspace {
     w = {
       matrix: new Float64Array(maxSize * maxSize),
       rhs: new Float64Array(maxSize),
+      factors: new Float64Array(maxSize * maxSize),
+      delta: new Float64Array(maxSize),
       F: new Float64Array(nE),
       scale: new Float64Array(nE),
       dHalfZ2mDLambda: new Float64Array(nE),
@@ -344,6 +349,7 @@ export type NewtonOptions = { maxIterations: number; balanceTolerance: number; c
 export function solveFixedPhases(p: EquilibriumProblem, s: SolverState, o: NewtonOptions): NewtonOutcome {
   const nE = p.elements.length;
   const amountLimit = divergenceLimit(p);
+  const workspace = workspaceOf(p);
   let last: Assembly | undefined;
   for (let iteration = 0; iteration <= o.maxIterations; iteration++) {
     const a = assemble(p, s);
@@ -356,11 +362,15 @@ export function solveFixedPhases(p: EquilibriumProblem, s: SolverState, o: Newto
     if ((a.balanceResidual <= o.balanceTolerance && a.conditionResidual <= o.conditionTolerance) || stalledAtRoundOff)
       return { converged: true, iterations: iteration, balanceResidual: a.balanceResidual, conditionResidual: a.conditionResidual, singular: false };
     if (iteration === o.maxIterations || performance.now() > o.deadline) break;
-    let delta = a.rhs.slice(0, a.size);
-    if (!solveInPlace(a.matrix.slice(0, a.size * a.size), delta, a.size)) {
+    // The step and the factorised copy of the matrix live in the workspace too (the matrix itself is kept for the
+    // regularised retry below).
+    const delta = workspace.delta;
+    delta.set(a.rhs.subarray(0, a.size));
+    workspace.factors.set(a.matrix.subarray(0, a.size * a.size));
+    if (!solveInPlace(workspace.factors, delta, a.size)) {
       // Element potentials not fixed by the present phases (a dry solid assemblage with fewer phases than
       // elements leaves directions of λ free): regularise the λ block (Tikhonov) for a near least-norm step.
-      delta = a.rhs.slice(0, a.size);
+      delta.set(a.rhs.subarray(0, a.size));
       const m = a.matrix;
       for (let j = 0; j < nE; j++) {
         let rowMax = 0;

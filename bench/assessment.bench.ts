@@ -4,8 +4,8 @@ import { runAssessment } from "../lib/service/assess";
 /**
  * A full assessment (base, timeline and scenarios at 40 points, no Monte Carlo), and with 200 Monte Carlo samples.
  * Targets 300 ms and 5 s (issue 5). The first run is reported apart: it fills the per-data-set caches (standard
- * potentials per temperature, problem structures, the drying map and transition humidities) and warms the JIT; the
- * figure against the target is the median of the three runs after it. The Monte Carlo figure includes one
+ * potentials per temperature, problem structures, the drying map and transition humidities) and starts the JIT; after
+ * two more unmeasured runs (JIT warm-up, as for the other benchmarks) the figure against the target is the median of five. The Monte Carlo figure includes one
  * deterministic assessment and the reference run of the samples' path; the per-sample figure subtracts the former.
  */
 export async function run(): Promise<Record<string, unknown>> {
@@ -26,7 +26,10 @@ export async function run(): Promise<Record<string, unknown>> {
     return performance.now() - start;
   };
   const first = await time(input);
-  const full = [await time(input), await time(input), await time(input)].sort((a, b) => a - b)[1];
+  for (let i = 0; i < 2; i++) await time(input);
+  const runs: number[] = [];
+  for (let i = 0; i < 5; i++) runs.push(await time(input));
+  const full = runs.sort((a, b) => a - b)[2];
   const monteCarlo = await time({ ...input, options: { sweepPoints: 40, monteCarlo: { samples, seed: 1 } } });
   const round = (ms: number) => Math.round(ms);
   return {

@@ -125,8 +125,8 @@ export function hydratePaste(
     if (!loaded.ok) return { ok: false, error: { code: "invalid_input", field: "dataset", message: loaded.error.message } };
     dataset = loaded.value;
   }
-  const byId = new Map(dataset.species.map((s) => [s.id, s.elements]));
-  const elementsOf = (id: string): Record<string, number> => byId.get(id) ?? {};
+  const byId = speciesById(dataset);
+  const elementsOf = (id: string): Record<string, number> => byId.get(id)?.elements ?? {};
   const suppressed = suppressedPhases(options.temperatureC, { enable: options.enable, suppress: options.suppress });
   const uptake = alkaliUptakeByCsh(composition.reactedElementsMol, (totals, warmStart) =>
     equilibrateSystem({
@@ -160,7 +160,7 @@ export function hydratePaste(
     let soluteMassG = 0;
     for (const s of solution.species) {
       if (s.name === "H2O(l)") continue;
-      soluteMassG += s.molality * solution.waterKg * molarMassGPerMol(elementsOf(s.name));
+      soluteMassG += s.molality * solution.waterKg * (byId.get(s.name)?.molarMassGPerMol ?? 0);
     }
     const densityGPerCm3 = waterDensityKgPerM3(options.temperatureC + KELVIN_OFFSET) / 1000;
     poreSolutionVolumeCm3 = (solution.waterKg * 1000 + soluteMassG) / densityGPerCm3;
@@ -240,6 +240,18 @@ export function hydratePaste(
       warnings,
     },
   };
+}
+
+const speciesIndex = new WeakMap<Dataset, ReadonlyMap<string, Dataset["species"][number]>>();
+
+/** The data set's species by id, built once per data set (a sweep hydrates the paste hundreds of times). */
+function speciesById(dataset: Dataset): ReadonlyMap<string, Dataset["species"][number]> {
+  let index = speciesIndex.get(dataset);
+  if (!index) {
+    index = new Map(dataset.species.map((s) => [s.id, s]));
+    speciesIndex.set(dataset, index);
+  }
+  return index;
 }
 
 type Solve = (totals: Record<string, number>, warmStart?: SerializedState) => { ok: true; value: EquilibriumResult } | { ok: false; error: EquilibriumFailure };

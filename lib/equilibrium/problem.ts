@@ -158,11 +158,13 @@ export function buildProblem(input: ProblemInput): EquilibriumOutcome<Equilibriu
       };
     }
   }
+  const totals = new Float64Array(template.keep.length);
+  for (let k = 0; k < totals.length; k++) totals[k] = fullTotals[template.keep[k]];
   return {
     ok: true,
     value: {
       ...template.problem,
-      totals: Float64Array.from(template.keep, (j) => fullTotals[j]),
+      totals,
       activity: input.activity,
       ...activityClasses(template.problem, input.activity),
     },

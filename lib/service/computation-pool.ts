@@ -1,6 +1,6 @@
-import { Worker } from "node:worker_threads";
+import type { Worker } from "node:worker_threads";
 import { domainError, type ServiceOutcome } from "./outcome";
-import { missingFileMessage, resolveWorkerFiles, WorkerJobError, type WorkerModule } from "./worker-job-runner";
+import { missingFileMessage, resolveWorkerFiles, startWorkerThread, WorkerJobError, type WorkerModule } from "./worker-job-runner";
 
 /**
  * A small pool of long-lived worker threads for computations on the request path (`POST /api/v1/assess`),
@@ -80,8 +80,8 @@ export function createComputationPool<T>(module: WorkerModule, options: Computat
     void slot.worker.terminate();
   }
 
-  function startWorker(bootstrap: string, modulePath: string): Slot<T> {
-    const worker = new Worker(bootstrap, { workerData: { mode: "pool", modulePath, exportName: module.exportName } });
+  function startWorker(modulePath: string): Slot<T> {
+    const worker = startWorkerThread({ mode: "pool", modulePath, exportName: module.exportName });
     const slot: Slot<T> = { worker, state: "idle", request: null };
     slots.add(slot);
     worker.on("message", (message: PoolMessage<T>) => {
@@ -128,7 +128,7 @@ export function createComputationPool<T>(module: WorkerModule, options: Computat
           request.reject(new WorkerJobError(missingFileMessage(files.missingPath)));
           continue;
         }
-        slot = startWorker(files.bootstrap, files.modulePath);
+        slot = startWorker(files.modulePath);
       }
       const request = queue.shift()!;
       slot.state = "busy";

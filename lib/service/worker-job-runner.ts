@@ -45,6 +45,16 @@ export function resolveWorkerFiles(module: WorkerModule): WorkerFiles {
   return { ok: true, bootstrap, modulePath };
 }
 
+/**
+ * Starts a worker thread on the bootstrap. The bootstrap's path is written out in the `new Worker` call itself:
+ * the bundler follows that expression to the ignored project root and leaves the file alone, whereas a path
+ * handed in as a value (a parameter or a property) made it trace and compile the whole project, README and tests
+ * included, which broke `next build`.
+ */
+export function startWorkerThread(workerData: Record<string, unknown>): Worker {
+  return new Worker(fromRoot(BOOTSTRAP_PATH), { workerData });
+}
+
 /** The message of a missing worker file, with the remedy. */
 export const missingFileMessage = (path: string) => `the job worker's file ${path} is missing (set HYDRASTATE_ROOT to the project directory)`;
 
@@ -65,7 +75,7 @@ export function workerJobRunner<T>(module: WorkerModule): JobRunner<T> {
       const files = resolveWorkerFiles(module);
       if (!files.ok) return reject(new WorkerJobError(missingFileMessage(files.missingPath)));
 
-      const worker = new Worker(files.bootstrap, { workerData: { modulePath: files.modulePath, exportName: module.exportName, raw } });
+      const worker = startWorkerThread({ modulePath: files.modulePath, exportName: module.exportName, raw });
       liveWorkers.add(worker);
       let settled = false;
       const settle = (finish: () => void) => {

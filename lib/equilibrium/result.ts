@@ -185,7 +185,10 @@ export function buildResult(
   if (aqueous) {
     const aq = aqueous;
     const nE = p.elements.length;
-    const elementMolality: Record<string, number> = {};
+    // Sums per element index, species in order, and the elements in the order first met (the report's key order).
+    const sums = new Float64Array(nE);
+    const firstMet: number[] = [];
+    const met = new Uint8Array(nE);
     const species: SolutionSpecies[] = [];
     for (const i of p.phases[p.aqueous].species) {
       if (i === p.water) {
@@ -198,10 +201,15 @@ export function buildResult(
       for (let x = 0; x < nz.length; x++) {
         const j = nz[x];
         if (j === p.chargeRow) continue;
-        const a = p.stoich[i * nE + j];
-        elementMolality[p.elements[j]] = (elementMolality[p.elements[j]] ?? 0) + a * m;
+        sums[j] += p.stoich[i * nE + j] * m;
+        if (!met[j]) {
+          met[j] = 1;
+          firstMet.push(j);
+        }
       }
     }
+    const elementMolality: Record<string, number> = {};
+    for (const j of firstMet) elementMolality[p.elements[j]] = sums[j];
     species.sort((x, y) => y.molality - x.molality);
     solution = { waterKg: s.amount[p.aqueous], waterActivity: Math.exp(aq.lnWaterActivity), elementMolality, species };
     ionicStrength = aq.ionicStrength;

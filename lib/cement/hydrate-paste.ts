@@ -4,6 +4,7 @@ import { suppressedPhases } from "../data/kinetic-constraints";
 import alkaliUptake from "../data/binders/alkali-uptake.json";
 import gelPores from "../data/binders/gel-pores.json";
 import { equilibrateSystem } from "../equilibrium/equilibrate";
+import { getOrCreate } from "../memo/get-or-create";
 import type { EquilibriumFailure } from "../equilibrium/failure";
 import type { EquilibriumResult, SerializedState } from "../equilibrium/result";
 import { potassiumHydroxideDominatedParameters } from "../thermo/truesdell-jones";
@@ -246,12 +247,7 @@ const speciesIndex = new WeakMap<Dataset, ReadonlyMap<string, Dataset["species"]
 
 /** The data set's species by id, built once per data set (a sweep hydrates the paste hundreds of times). */
 function speciesById(dataset: Dataset): ReadonlyMap<string, Dataset["species"][number]> {
-  let index = speciesIndex.get(dataset);
-  if (!index) {
-    index = new Map(dataset.species.map((s) => [s.id, s]));
-    speciesIndex.set(dataset, index);
-  }
-  return index;
+  return getOrCreate(speciesIndex, dataset, () => new Map(dataset.species.map((s) => [s.id, s])));
 }
 
 type Solve = (totals: Record<string, number>, warmStart?: SerializedState) => { ok: true; value: EquilibriumResult } | { ok: false; error: EquilibriumFailure };

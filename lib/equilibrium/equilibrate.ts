@@ -9,6 +9,7 @@ import { individualIonParameters } from "../data/ion-size-parameters";
 import { sodiumChlorideDominatedParameters, truesdellJonesModel, type TruesdellJonesParameters } from "../thermo/truesdell-jones";
 import type { EquilibriumOutcome } from "./failure";
 import type { AqueousActivityModel } from "./types";
+import { getOrCreate } from "../memo/get-or-create";
 import { minimise } from "./minimise";
 import { buildProblem } from "./problem";
 import { buildResult, deserializeState, type EquilibriumResult, type SerializedState } from "./result";
@@ -38,32 +39,20 @@ const phaseIdsOf = new WeakMap<Dataset, ReadonlySet<string>>();
 
 /** Ids that `suppressedPhases` may name: pure solids and solid solutions (computed once per data set). */
 export function phaseIds(dataset: Dataset): ReadonlySet<string> {
-  let ids = phaseIdsOf.get(dataset);
-  if (!ids) {
-    const found = new Set<string>();
-    for (const s of dataset.species) if (s.phase === "solid") found.add(s.solution ?? s.id);
-    ids = found;
-    phaseIdsOf.set(dataset, ids);
-  }
-  return ids;
+  return getOrCreate(phaseIdsOf, dataset, () => {
+    const ids = new Set<string>();
+    for (const s of dataset.species) if (s.phase === "solid") ids.add(s.solution ?? s.id);
+    return ids;
+  });
 }
 
 /** Activity models by parameter set and temperature: a sweep at one temperature builds its model once. */
 const activityModels = new WeakMap<TruesdellJonesParameters, Map<number, AqueousActivityModel>>();
 
 function activityModelAt(temperatureK: number, params: TruesdellJonesParameters): AqueousActivityModel {
-  let byTemperature = activityModels.get(params);
-  if (!byTemperature) {
-    byTemperature = new Map();
-    activityModels.set(params, byTemperature);
-  }
-  let model = byTemperature.get(temperatureK);
-  if (!model) {
-    model = truesdellJonesModel(temperatureK, params);
-    if (byTemperature.size > 256) byTemperature.clear();
-    byTemperature.set(temperatureK, model);
-  }
-  return model;
+  const byTemperature = getOrCreate(activityModels, params, () => new Map<number, AqueousActivityModel>());
+  if (byTemperature.size > 256 && !byTemperature.has(temperatureK)) byTemperature.clear();
+  return getOrCreate(byTemperature, temperatureK, () => truesdellJonesModel(temperatureK, params));
 }
 
 /**

@@ -1,6 +1,7 @@
 import { solveInPlace } from "./dense-lu";
 import { WATER_MOLAR_MASS_KG_PER_MOL, type EquilibriumProblem } from "./problem";
 import type { SoluteActivityTerms } from "./types";
+import { getOrCreate } from "../memo/get-or-create";
 
 /**
  * The state of the element-potential formulation (Gordon & McBride 1994, NASA RP-1311, ch. 2; Smith &
@@ -169,35 +170,31 @@ type Workspace = {
 const workspaces = new WeakMap<Float64Array, Workspace>();
 
 function workspaceOf(p: EquilibriumProblem): Workspace {
-  let w = workspaces.get(p.stoich);
-  if (!w) {
-    const nE = p.elements.length;
-    const nS = p.species.length;
-    const maxSize = nE + 1 + p.phases.length;
-    w = {
-      matrix: new Float64Array(maxSize * maxSize),
-      rhs: new Float64Array(maxSize),
-      factors: new Float64Array(maxSize * maxSize),
-      delta: new Float64Array(maxSize),
-      F: new Float64Array(nE),
-      scale: new Float64Array(nE),
-      dHalfZ2mDLambda: new Float64Array(nE),
-      dLnAwDLambda: new Float64Array(nE),
-      aq: {
-        ionicStrength: 0,
-        molality: new Float64Array(nS),
-        lnGamma: new Float64Array(nS),
-        dLnGammaDI: new Float64Array(nS),
-        totalMolality: 0,
-        chargedMolality: 0,
-        lnWaterActivity: 0,
-        dLnAwDMolality: new Float64Array(nS),
-        dLnAwDI: 0,
-      },
-    };
-    workspaces.set(p.stoich, w);
-  }
-  return w;
+  return getOrCreate(workspaces, p.stoich, () => newWorkspace(p.elements.length, p.species.length, p.elements.length + 1 + p.phases.length));
+}
+
+function newWorkspace(nE: number, nS: number, maxSize: number): Workspace {
+  return {
+    matrix: new Float64Array(maxSize * maxSize),
+    rhs: new Float64Array(maxSize),
+    factors: new Float64Array(maxSize * maxSize),
+    delta: new Float64Array(maxSize),
+    F: new Float64Array(nE),
+    scale: new Float64Array(nE),
+    dHalfZ2mDLambda: new Float64Array(nE),
+    dLnAwDLambda: new Float64Array(nE),
+    aq: {
+      ionicStrength: 0,
+      molality: new Float64Array(nS),
+      lnGamma: new Float64Array(nS),
+      dLnGammaDI: new Float64Array(nS),
+      totalMolality: 0,
+      chargedMolality: 0,
+      lnWaterActivity: 0,
+      dLnAwDMolality: new Float64Array(nS),
+      dLnAwDI: 0,
+    },
+  };
 }
 
 /**

@@ -1,5 +1,6 @@
 import type { AqueousActivityModel, SoluteActivityTerms, SpeciesAtTemperature } from "./types";
 import type { EquilibriumOutcome } from "./failure";
+import { getOrCreate } from "../memo/get-or-create";
 
 /** Molar gas constant, J/(mol·K) (CODATA 2018, exact). */
 export const GAS_CONSTANT_J_PER_MOL_K = 8.314462618;
@@ -177,17 +178,8 @@ const activityClassCache = new WeakMap<readonly ProblemSpecies[], WeakMap<Aqueou
 
 /** Groups the solutes by the activity model's parameter key and resolves each class's terms once. */
 function activityClasses(problem: Pick<EquilibriumProblem, "species" | "aqueous" | "water">, activity: AqueousActivityModel): ActivityClasses {
-  let byModel = activityClassCache.get(problem.species);
-  if (!byModel) {
-    byModel = new WeakMap();
-    activityClassCache.set(problem.species, byModel);
-  }
-  let classes = byModel.get(activity);
-  if (!classes) {
-    classes = groupActivityClasses(problem, activity);
-    byModel.set(activity, classes);
-  }
-  return classes;
+  const byModel = getOrCreate(activityClassCache, problem.species, () => new WeakMap<AqueousActivityModel, ActivityClasses>());
+  return getOrCreate(byModel, activity, () => groupActivityClasses(problem, activity));
 }
 
 function groupActivityClasses(problem: Pick<EquilibriumProblem, "species" | "aqueous" | "water">, activity: AqueousActivityModel): ActivityClasses {

@@ -3,6 +3,7 @@ import { formatIssues } from "../schema/format-issues";
 import type { AssessmentResult } from "./assess";
 import { createJobRegistry, type JobRegistry, type JobStatus } from "./jobs";
 import { validationError, type ServiceOutcome } from "./outcome";
+import { processWide } from "./process-wide";
 import { workerJobRunner, type WorkerModule } from "./worker-job-runner";
 
 /** What an assessment job's worker runs: `runAssessment(raw, { onProgress })` of `lib/service/assess.ts`. */
@@ -14,21 +15,15 @@ export const assessmentWorkerModule: WorkerModule = { modulePath: "lib/service/a
  * own worker thread (`worker-job-runner.ts`), so the server keeps answering other requests meanwhile, and a
  * cancelled job's worker is terminated.
  */
-const key = Symbol.for("hydrastate.assessmentJobs");
-type Holder = { [key]?: JobRegistry<AssessmentResult> };
+const jobs = processWide("hydrastate.assessmentJobs", () => createJobRegistry<AssessmentResult>(workerJobRunner<AssessmentResult>(assessmentWorkerModule)));
 
 export function assessmentJobs(): JobRegistry<AssessmentResult> {
-  const holder = globalThis as Holder;
-  holder[key] ??= createJobRegistry<AssessmentResult>(workerJobRunner<AssessmentResult>(assessmentWorkerModule));
-  return holder[key];
+  return jobs.get();
 }
 
 /** Replaces the registry (tests); returns the previous one. */
 export function setAssessmentJobs(registry: JobRegistry<AssessmentResult> | undefined): JobRegistry<AssessmentResult> | undefined {
-  const holder = globalThis as Holder;
-  const previous = holder[key];
-  holder[key] = registry;
-  return previous;
+  return jobs.replace(registry);
 }
 
 /** Starts a job after validating the input, so that bad input is a 422 at once rather than a failed job. */

@@ -1,6 +1,7 @@
 import type { AssessmentResult } from "./assess";
 import { assessmentWorkerModule } from "./assess-jobs";
 import { createComputationPool, POOL_SIZE_LIMITS, type ComputationPool } from "./computation-pool";
+import { processWide } from "./process-wide";
 
 /** The environment variable that sets the number of pool workers for `POST /api/v1/assess`. */
 export const ASSESS_WORKERS_ENV = "HYDRASTATE_ASSESS_WORKERS";
@@ -22,23 +23,17 @@ export function assessWorkersFrom(text: string | undefined): { ok: true; value: 
  * assessment jobs), on `globalThis` so that a reloaded route module finds the workers already started. An
  * invalid `HYDRASTATE_ASSESS_WORKERS` is reported in one log line and the default is used.
  */
-const key = Symbol.for("hydrastate.assessmentPool");
-type Holder = { [key]?: ComputationPool<AssessmentResult> };
+const pool = processWide("hydrastate.assessmentPool", () => {
+  const size = assessWorkersFrom(process.env[ASSESS_WORKERS_ENV]);
+  if (!size.ok) console.error(JSON.stringify({ level: "warn", ...size.error, using: DEFAULT_ASSESS_WORKERS }));
+  return createComputationPool<AssessmentResult>(assessmentWorkerModule, { size: size.ok ? size.value : DEFAULT_ASSESS_WORKERS });
+});
 
 export function assessmentPool(): ComputationPool<AssessmentResult> {
-  const holder = globalThis as Holder;
-  if (!holder[key]) {
-    const size = assessWorkersFrom(process.env[ASSESS_WORKERS_ENV]);
-    if (!size.ok) console.error(JSON.stringify({ level: "warn", ...size.error, using: DEFAULT_ASSESS_WORKERS }));
-    holder[key] = createComputationPool<AssessmentResult>(assessmentWorkerModule, { size: size.ok ? size.value : DEFAULT_ASSESS_WORKERS });
-  }
-  return holder[key];
+  return pool.get();
 }
 
 /** Replaces the pool (tests); returns the previous one, which the caller closes. */
-export function setAssessmentPool(pool: ComputationPool<AssessmentResult> | undefined): ComputationPool<AssessmentResult> | undefined {
-  const holder = globalThis as Holder;
-  const previous = holder[key];
-  holder[key] = pool;
-  return previous;
+export function setAssessmentPool(replacement: ComputationPool<AssessmentResult> | undefined): ComputationPool<AssessmentResult> | undefined {
+  return pool.replace(replacement);
 }

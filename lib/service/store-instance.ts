@@ -1,5 +1,6 @@
 import type { AssessmentStore } from "../store/assessment-store";
 import { databasePath, openSqliteStore } from "../store/sqlite-store";
+import { processWide } from "./process-wide";
 import { runningVersions } from "./versions";
 
 /**
@@ -7,19 +8,13 @@ import { runningVersions } from "./versions";
  * `data/hydrastate.sqlite`). Kept on `globalThis` because Next bundles each route separately and a
  * module-level variable would open one connection per route.
  */
-const key = Symbol.for("hydrastate.assessmentStore");
-type Holder = { [key]?: AssessmentStore };
+const store = processWide<AssessmentStore>("hydrastate.assessmentStore", () => openSqliteStore({ path: databasePath(), currentVersions: runningVersions() }));
 
 export function assessmentStore(): AssessmentStore {
-  const holder = globalThis as Holder;
-  holder[key] ??= openSqliteStore({ path: databasePath(), currentVersions: runningVersions() });
-  return holder[key];
+  return store.get();
 }
 
 /** Replaces the process-wide store (tests use an in-memory one); returns the previous one. */
-export function setAssessmentStore(store: AssessmentStore | undefined): AssessmentStore | undefined {
-  const holder = globalThis as Holder;
-  const previous = holder[key];
-  holder[key] = store;
-  return previous;
+export function setAssessmentStore(replacement: AssessmentStore | undefined): AssessmentStore | undefined {
+  return store.replace(replacement);
 }

@@ -1,6 +1,6 @@
 import type { AssessmentResult } from "./assess";
 import { assessmentWorkerModule } from "./assess-jobs";
-import { createComputationPool, POOL_SIZE_LIMITS, type ComputationPool } from "./computation-pool";
+import { createComputationPool, poolSizeFrom, type ComputationPool, type PoolSizeError } from "./computation-pool";
 import { processWide } from "./process-wide";
 
 /** The environment variable that sets the number of pool workers for `POST /api/v1/assess`. */
@@ -8,14 +8,9 @@ export const ASSESS_WORKERS_ENV = "HYDRASTATE_ASSESS_WORKERS";
 /** Default pool workers: one, leaving the second core of the 2-core service machines to the job workers and the server. */
 export const DEFAULT_ASSESS_WORKERS = 1;
 
-export type PoolSizeError = { code: "invalid_pool_size"; field: typeof ASSESS_WORKERS_ENV; value: string; min: number; max: number };
-
 /** The pool size from the environment's text: unset or empty gives the default; anything but an integer in the limits is an error. */
-export function assessWorkersFrom(text: string | undefined): { ok: true; value: number } | { ok: false; error: PoolSizeError } {
-  if (text === undefined || text.trim() === "") return { ok: true, value: DEFAULT_ASSESS_WORKERS };
-  const value = Number(text);
-  if (Number.isInteger(value) && value >= POOL_SIZE_LIMITS.min && value <= POOL_SIZE_LIMITS.max) return { ok: true, value };
-  return { ok: false, error: { code: "invalid_pool_size", field: ASSESS_WORKERS_ENV, value: text, ...POOL_SIZE_LIMITS } };
+export function assessWorkersFrom(text: string | undefined): { ok: true; value: number } | { ok: false; error: PoolSizeError<typeof ASSESS_WORKERS_ENV> } {
+  return poolSizeFrom(ASSESS_WORKERS_ENV, text, DEFAULT_ASSESS_WORKERS);
 }
 
 /**

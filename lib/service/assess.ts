@@ -1,224 +1,29 @@
 import packageJson from "../../package.json";
-import { binderSystemFromInput } from "../cement/binder-system";
-import { hydratePaste, type HydratedPaste } from "../cement/hydrate-paste";
-import { hydrationTimeline, type TimelineEntry } from "../cement/hydration-timeline";
 import { cautionTextsFor } from "../advisory/cautions";
-import { classifyExposure, type ExposureClassification } from "../advisory/exposure-classes";
-import { checkCompliance, type ComplianceResult } from "../advisory/exposure-compliance";
-import { sortFlags, type Flag } from "../advisory/flag";
-import { carbonationDepassivationFlag } from "../advisory/flag-rules/carbonation-depassivation";
-import { gypsumFormationFlag } from "../advisory/flag-rules/gypsum-formation";
-import { lowAlkalinityReserveFlag } from "../advisory/flag-rules/low-alkalinity-reserve";
-import { magnesiumSulfateAttackFlag } from "../advisory/flag-rules/magnesium-sulfate-attack";
-import { severeSulfateExposure, sulfateAttackFlag } from "../advisory/flag-rules/sulfate-attack";
-import { adviseCuring, type CuringAdvice } from "../curing/advise-curing";
-import { loadDataset, type Dataset } from "../data/load-dataset";
-import { describeFailure } from "../equilibrium/failure";
-import { phaseIds } from "../equilibrium/equilibrate";
-import { carbonationScenario, type CarbonationScenario } from "../scenarios/carbonation";
-import { chlorideBinding, exposureChlorideMgPerL, type ChlorideBindingScenario } from "../scenarios/chloride-binding";
-import { dryingScenario, type DryingScenario } from "../scenarios/drying";
-import { temperatureHistory, type TemperatureHistoryResult } from "../scenarios/temperature-history";
-import { thaumasite, type ThaumasiteResult } from "../scenarios/thaumasite";
-import { chlorideBindingLimitFlag } from "../advisory/flag-rules/chloride-binding-limit";
-import { delayedEttringiteFormationFlag } from "../advisory/flag-rules/delayed-ettringite-formation";
-import { ettringiteDehydrationFlag } from "../advisory/flag-rules/ettringite-dehydration";
-import { thaumasiteFormationFlag } from "../advisory/flag-rules/thaumasite-formation";
-import { sulfateIngress, type SulfateScenario } from "../scenarios/sulfate-ingress";
-import { alkaliBoundFractionOf, bookedPaste, newWarmStartBook, readingBook, recordPaste, type ScenarioBase, type WarmStartBook } from "../scenarios/sweep";
-import { assessInput, binderInputOf, type AssessInput } from "../schema/assess-input";
-import { formatIssues } from "../schema/format-issues";
-import { domainError, validationError, type ServiceOutcome } from "./outcome";
-import { sampleDataset } from "./perturbed-dataset";
+import { sortFlags } from "../advisory/flag";
 import { summarise, flagRobustness } from "../advisory/sample-statistics";
-import { createRng } from "../advisory/random";
+import { loadDataset, type Dataset } from "../data/load-dataset";
+import { phaseIds } from "../equilibrium/equilibrate";
+import { assessInput, type AssessInput } from "../schema/assess-input";
+import { formatIssues } from "../schema/format-issues";
+import { assessWithDataset, binderSystemOf, type AssessmentResult } from "./assessment-core";
+import { assessSample, samplePathReference, type SampleValue } from "./assessment-samples";
+import { domainError, validationError, type ServiceOutcome } from "./outcome";
+import { samplePool, samplesInWorkers, SAMPLES_PER_RANGE } from "./sample-pool";
 
-export type AssessmentScenarios = {
-  sulfate?: SulfateScenario;
-  carbonation?: CarbonationScenario;
-  temperature?: TemperatureHistoryResult;
-  thaumasite?: ThaumasiteResult;
-  chloride?: ChlorideBindingScenario;
-  drying?: DryingScenario;
-};
+export type { AssessmentResult, AssessmentScenarios } from "./assessment-core";
 
-export type AssessmentResult = {
-  inputs: AssessInput;
-  assemblage: {
-    temperatureC: number;
-    paste: Omit<HydratedPaste, "assemblage"> & { assemblage: Omit<HydratedPaste["assemblage"], "state"> };
-    timeline: TimelineEntry[];
-  };
-  scenarios: AssessmentScenarios;
-  /** Scenarios the engine could not complete, with the typed reason; the rest of the assessment stands. */
-  scenarioErrors: Partial<Record<keyof AssessmentScenarios, { code: string; message: string }>>;
-  exposureClasses: ExposureClassification;
-  compliance: ComplianceResult;
-  curing?: CuringAdvice;
-  flags: Flag[];
-  uncertainty?: {
-    samples: number;
-    seed: number;
-    /** Phase id → P5/P50/P95 of its volume, cm³ per 100 g binder. */
-    phaseVolumesCm3: Record<string, { p5: number; p50: number; p95: number; mean: number }>;
-    failedSamples: number;
-  };
-  cautions: string[];
-  warnings: { code: string; [key: string]: unknown }[];
-  versions: { dataset: string; engine: string };
-};
-
-/** Sweep points of the Monte Carlo samples (each sample reruns every scenario; fewer points keep it tractable). */
-const MONTE_CARLO_SWEEP_POINTS = 8;
-
-type Deterministic = Omit<AssessmentResult, "inputs" | "uncertainty" | "cautions" | "versions">;
-
-type AssessOptions = {
-  points: number;
-  withTimeline: boolean;
-  /** Warm starts recorded by a reference run, or read by a Monte Carlo sample (`WarmStartBook`). */
-  book?: WarmStartBook;
+export type AssessmentOptions = {
+  signal?: AbortSignal;
+  onProgress?: (fraction: number) => void;
+  /** A data set other than the one loaded from `lib/data` (tests, sensitivity studies). */
+  dataset?: Dataset;
   /**
-   * The Monte Carlo path: drying at the service conditions only (`dryingScenario`'s `serviceOnly`), and, when the book
-   * is read, the temperature and thaumasite scenarios reduced to their service/curing states with the stability
-   * temperatures found by root finding from the reference run's.
+   * Worker threads for the Monte Carlo samples; default: the process's sample pool (`sample-pool.ts`,
+   * HYDRASTATE_SAMPLE_WORKERS). With 1, or fewer than two ranges of samples, they are computed in this thread.
    */
-  reduced?: boolean;
+  sampleWorkers?: number;
 };
-
-/** Everything for one data set: the base assemblage, the scenarios and their flags. */
-function assessWithDataset(input: AssessInput, dataset: Dataset, options: AssessOptions): ServiceOutcome<Deterministic> {
-  const { points, withTimeline, book } = options;
-  const system = binderSystemFromInput(binderInputOf(input));
-  if (!system.ok) {
-    const error = system.error;
-    if (error.code === "invalid_input") return validationError(error.issues.map((i) => ({ ...i, path: i.path.startsWith("cement") || i.path.startsWith("supplementaryMaterials") ? `binder.${i.path}` : i.path })));
-    return domainError(error.code, JSON.stringify(error));
-  }
-  const temperatureC = input.age.mode === "age" ? input.age.curingTemperatureC : 20;
-  const overrides = { suppress: input.options.suppressedPhases, enable: input.options.allowedPhases, dataset };
-  const reacted = system.value.composition.reactedElementsMol;
-  const warmFrom = (start: HydratedPaste | undefined) => (start ? { warmStart: start.assemblage.state, alkaliBoundFraction: alkaliBoundFractionOf(start, reacted) } : {});
-  const paste = hydratePaste(system.value.composition, { temperatureC, binderContentKgPerM3: input.mix.binderContentKgPerM3, ...overrides, ...warmFrom(bookedPaste(book, "base", temperatureC)) });
-  if (!paste.ok) return domainError(paste.error.code, describeFailure(paste.error));
-  recordPaste(book, "base", temperatureC, paste.value);
-  let timeline: TimelineEntry[] = [];
-  if (withTimeline) {
-    const series = hydrationTimeline(system.value.binder, { temperatureC, points, firstAgeDays: 1 / 24, lastAgeDays: 3650, ...overrides });
-    if (!series.ok) return domainError(series.error.code, describeFailure(series.error));
-    timeline = series.value.entries;
-  }
-  const exposure = input.exposure;
-  const serviceTemperatureC =
-    typeof exposure.serviceTemperatureC === "number" ? exposure.serviceTemperatureC : exposure.serviceTemperatureC ? (exposure.serviceTemperatureC.minC + exposure.serviceTemperatureC.maxC) / 2 : 20;
-  const scenarioTemperatureC = Math.min(100, Math.max(0, serviceTemperatureC));
-  // The unexposed paste at the service temperature, solved once (from the base paste) as every scenario's first warm
-  // start; when it cannot be solved the scenarios start cold and report their own failure.
-  const service = hydratePaste(system.value.composition, {
-    temperatureC: scenarioTemperatureC,
-    binderContentKgPerM3: input.mix.binderContentKgPerM3,
-    ...overrides,
-    ...warmFrom(bookedPaste(book, "service", scenarioTemperatureC) ?? paste.value),
-  });
-  if (service.ok) recordPaste(book, "service", scenarioTemperatureC, service.value);
-  const base: ScenarioBase = {
-    composition: system.value.composition,
-    temperatureC: scenarioTemperatureC,
-    binderContentKgPerM3: input.mix.binderContentKgPerM3,
-    suppress: input.options.suppressedPhases,
-    enable: input.options.allowedPhases,
-    dataset,
-    warmFrom: service.ok ? service.value : undefined,
-    book,
-  };
-  const scenarios: AssessmentScenarios = {};
-  const scenarioErrors: AssessmentResult["scenarioErrors"] = {};
-  const flags: Flag[] = [];
-  const context = { exposure, waterBinderRatio: input.mix.waterBinderRatio, curingMaxTemperatureC: input.curing.maxTemperatureC };
-
-  if (severeSulfateExposure(exposure).any || (exposure.sulfateMgPerL ?? 0) > 0) {
-    const sulfate = sulfateIngress(base, exposure, { points });
-    if (!sulfate.ok) scenarioErrors.sulfate = { code: sulfate.error.code, message: `at ${(sulfate.error.dose * 1000).toFixed(1)} mmol SO4 per 100 g binder: ${describeFailure(sulfate.error)}` };
-    else {
-      scenarios.sulfate = sulfate.value;
-      for (const flag of [sulfateAttackFlag(sulfate.value, context), gypsumFormationFlag(sulfate.value), magnesiumSulfateAttackFlag(sulfate.value)]) if (flag) flags.push(flag);
-    }
-  }
-  const carbonation = carbonationScenario(base, exposure, { points, coverMm: input.project?.element?.coverMm });
-  if (!carbonation.ok) scenarioErrors.carbonation = { code: carbonation.error.code, message: describeFailure(carbonation.error) };
-  else {
-    scenarios.carbonation = carbonation.value;
-    const depassivation = carbonationDepassivationFlag(carbonation.value, { exposure: { ...exposure, coverMm: exposure.coverMm ?? input.project?.element?.coverMm } });
-    if (depassivation) flags.push(depassivation);
-  }
-  const reserve = lowAlkalinityReserveFlag({ portlanditeKgPerM3: paste.value.perM3.portlanditeKg, carbonatableCaMolPerM3: paste.value.perM3.carbonatableCaMol, pH: paste.value.poreSolution?.pH ?? null });
-  if (reserve) flags.push(reserve);
-
-  // The curing peak: the element model's core peak when the thermal model is given, else the entered maximum.
-  let curing: CuringAdvice | undefined;
-  if (input.curing.thermal) {
-    curing = adviseCuring(input.curing.thermal);
-    flags.push(...curing.flags);
-  }
-  const curingMaxTemperatureC = curing ? Math.max(curing.temperature.peakCoreC, input.curing.maxTemperatureC ?? -Infinity) : input.curing.maxTemperatureC;
-  const scenarioContext = { ...context, curingMaxTemperatureC };
-  const temperature = temperatureHistory(base, exposure, { points, curingMaxTemperatureC, reduced: options.reduced });
-  if (!temperature.ok) scenarioErrors.temperature = { code: temperature.error.code, message: temperature.error.message };
-  else {
-    scenarios.temperature = temperature.value;
-    const def = delayedEttringiteFormationFlag(temperature.value, scenarioContext);
-    if (def) flags.push(def);
-  }
-
-  const thaumasiteResult = thaumasite(base, exposure, { points: Math.max(5, Math.round(points / 2)), reduced: options.reduced });
-  if (!thaumasiteResult.ok) scenarioErrors.thaumasite = { code: thaumasiteResult.error.code, message: thaumasiteResult.error.message };
-  else {
-    scenarios.thaumasite = thaumasiteResult.value;
-    const thaumasiteFlag = thaumasiteFormationFlag(thaumasiteResult.value, scenarioContext);
-    if (thaumasiteFlag) flags.push(thaumasiteFlag);
-  }
-
-  if (exposureChlorideMgPerL(exposure) !== null || exposure.deIcingSalts) {
-    const chloride = chlorideBinding(base, exposure, { points });
-    if (!chloride.ok) scenarioErrors.chloride = { code: chloride.error.code, message: chloride.error.message };
-    else {
-      scenarios.chloride = chloride.value;
-      const chlorideFlag = chlorideBindingLimitFlag(chloride.value, scenarioContext);
-      if (chlorideFlag) flags.push(chlorideFlag);
-    }
-  }
-  if (exposure.relativeHumidityPercent !== undefined) {
-    const drying = dryingScenario(base, exposure, { points, serviceOnly: options.reduced });
-    if (!drying.ok) scenarioErrors.drying = { code: drying.error.code, message: drying.error.message };
-    else {
-      scenarios.drying = drying.value;
-      const dryingFlag = ettringiteDehydrationFlag(drying.value, scenarioContext);
-      if (dryingFlag) flags.push(dryingFlag);
-    }
-  }
-
-  const exposureClasses = classifyExposure(exposure);
-  const compliance = checkCompliance({ waterBinderRatio: input.mix.waterBinderRatio, binderContentKgPerM3: input.mix.binderContentKgPerM3 }, exposureClasses);
-  flags.push(...compliance.flags);
-
-  const { state: _state, ...assemblageWithoutState } = paste.value.assemblage;
-  return {
-    ok: true,
-    value: {
-      assemblage: { temperatureC, paste: { ...paste.value, assemblage: assemblageWithoutState }, timeline },
-      scenarios,
-      scenarioErrors,
-      exposureClasses,
-      compliance,
-      curing,
-      flags: sortFlags(flags),
-      warnings: [
-        ...paste.value.warnings,
-        ...Object.entries(scenarioErrors).map(([scenario, e]) => ({ code: "scenario_failed", scenario, reason: e!.code, message: e!.message })),
-      ] as AssessmentResult["warnings"],
-    },
-  };
-}
 
 /**
  * The assessment behind `assess` (CLI) and `POST /api/v1/assess`: base assemblage at the given age,
@@ -226,10 +31,7 @@ function assessWithDataset(input: AssessInput, dataset: Dataset, options: Assess
  * thermal model is given, flags ordered by severity, and the cautions. With `options.monteCarlo`, the data
  * set's uncertainties are sampled (seeded) and each flag reports how often it fires.
  */
-export async function runAssessment(
-  raw: unknown,
-  options: { signal?: AbortSignal; onProgress?: (fraction: number) => void; dataset?: Dataset } = {},
-): Promise<ServiceOutcome<AssessmentResult>> {
+export async function runAssessment(raw: unknown, options: AssessmentOptions = {}): Promise<ServiceOutcome<AssessmentResult>> {
   const parsed = assessInput.safeParse(raw);
   if (!parsed.success) return validationError(formatIssues(parsed.error));
   const input = parsed.data;
@@ -240,7 +42,9 @@ export async function runAssessment(
     const index = input.options[field].findIndex((id) => !known.has(id));
     if (index >= 0) return validationError([{ path: `options.${field}.${index}`, message: `unknown phase id "${input.options[field][index]}"` }]);
   }
-  const deterministic = assessWithDataset(input, loaded.value, { points: input.options.sweepPoints, withTimeline: true });
+  const binder = binderSystemOf(input);
+  if (!binder.ok) return binder;
+  const deterministic = assessWithDataset(input, binder.value, loaded.value, { points: input.options.sweepPoints, withTimeline: true });
   if (!deterministic.ok) return deterministic;
   const result: AssessmentResult = {
     inputs: input,
@@ -251,29 +55,19 @@ export async function runAssessment(
   options.onProgress?.(input.options.monteCarlo ? 0.05 : 1);
   if (input.options.monteCarlo) {
     const { samples, seed } = input.options.monteCarlo;
+    const values = await monteCarloSamples(input, loaded.value, samples, seed, options);
+    if (!values.ok) return values;
     const volumes: Record<string, number[]> = {};
     const fired: Record<string, boolean[]> = {};
     let failed = 0;
-    // The samples' path: the scenarios at MONTE_CARLO_SWEEP_POINTS points with drying at the service conditions only,
-    // first run once with the data set as it is to record a warm start at every point; each sample then starts every
-    // equilibrium from the reference at the same point (same composition and temperature, perturbed potentials).
-    const book = newWarmStartBook();
-    const reference = assessWithDataset(input, loaded.value, { points: MONTE_CARLO_SWEEP_POINTS, withTimeline: false, book, reduced: true });
-    const reading = reference.ok ? readingBook(book) : undefined;
-    for (let i = 0; i < samples; i++) {
-      if (options.signal?.aborted) return domainError("cancelled", `cancelled after ${i} of ${samples} samples`, { completedSamples: i });
-      const sampled = sampleDataset(loaded.value, createRng(seed, i));
-      const run = assessWithDataset(input, sampled, { points: MONTE_CARLO_SWEEP_POINTS, withTimeline: false, book: reading, reduced: true });
-      if (!run.ok) {
+    for (const value of values.value) {
+      if (!value) {
         failed++;
         continue;
       }
-      for (const [id, v] of Object.entries(run.value.assemblage.paste.volumes)) (volumes[id] ??= []).push(v);
-      const ids = new Set(run.value.flags.filter((f) => f.severity !== "info").map((f) => f.id));
+      for (const [id, v] of Object.entries(value.volumesCm3)) (volumes[id] ??= []).push(v);
+      const ids = new Set(value.firedFlagIds);
       for (const flag of result.flags) (fired[flag.id] ??= []).push(ids.has(flag.id));
-      options.onProgress?.(0.05 + (0.95 * (i + 1)) / samples);
-      // Let the event loop breathe so that progress polling and cancellation get through.
-      if (i % 5 === 4) await new Promise((resolve) => setImmediate(resolve));
     }
     result.uncertainty = {
       samples,
@@ -289,4 +83,33 @@ export async function runAssessment(
     result.flags = sortFlags(result.flags.map((flag) => (fired[flag.id]?.length ? { ...flag, robustness: flagRobustness(fired[flag.id]) } : flag)));
   }
   return { ok: true, value: result };
+}
+
+/**
+ * The Monte Carlo samples in index order: in the sample pool's worker threads when there are several workers and at
+ * least two ranges of samples, else (or when the workers cannot run, logged) in this thread. Either way the values are
+ * the same (`assessment-samples.ts`).
+ */
+async function monteCarloSamples(input: AssessInput, dataset: Dataset, samples: number, seed: number, options: AssessmentOptions): Promise<ServiceOutcome<SampleValue[]>> {
+  const progress = (completed: number) => options.onProgress?.(0.05 + (0.95 * completed) / samples);
+  const shared = options.sampleWorkers === 1 ? undefined : samplePool();
+  if (shared && shared.size > 1 && samples >= 2 * SAMPLES_PER_RANGE) {
+    // The workers load the data set themselves unless it is the caller's own.
+    const own = options.dataset !== undefined;
+    const inWorkers = await samplesInWorkers(shared.pool, { input, seed, datasetVersion: dataset.version, dataset: own ? dataset : undefined }, samples, { signal: options.signal, onSamplesDone: progress });
+    if (inWorkers.ok || inWorkers.error.kind !== "domain" || !["sample_worker_failed", "dataset_mismatch"].includes(inWorkers.error.code)) return inWorkers;
+    console.error(JSON.stringify({ level: "warn", event: "sample_workers_unavailable", reason: inWorkers.error.message, fallback: "this thread" }));
+  }
+  const binder = binderSystemOf(input);
+  if (!binder.ok) return binder;
+  const reference = samplePathReference(input, binder.value, dataset);
+  const values: SampleValue[] = [];
+  for (let i = 0; i < samples; i++) {
+    if (options.signal?.aborted) return domainError("cancelled", `cancelled after ${i} of ${samples} samples`, { completedSamples: i });
+    values.push(assessSample(input, binder.value, dataset, reference, seed, i));
+    progress(i + 1);
+    // Let the event loop breathe so that progress polling and cancellation get through.
+    if (i % 5 === 4) await new Promise((resolve) => setImmediate(resolve));
+  }
+  return { ok: true, value: values };
 }

@@ -35,6 +35,16 @@ export type ComputationPoolOptions = {
 /** Pool sizes accepted: a bound against typing errors, not a tuning (common practice). */
 export const POOL_SIZE_LIMITS = { min: 1, max: 16 } as const;
 
+export type PoolSizeError<F extends string = string> = { code: "invalid_pool_size"; field: F; value: string; min: number; max: number };
+
+/** A pool size from an environment variable's text: unset or empty gives the default; anything but an integer in the limits is an error naming the variable. */
+export function poolSizeFrom<F extends string>(field: F, text: string | undefined, defaultSize: number): { ok: true; value: number } | { ok: false; error: PoolSizeError<F> } {
+  if (text === undefined || text.trim() === "") return { ok: true, value: defaultSize };
+  const value = Number(text);
+  if (Number.isInteger(value) && value >= POOL_SIZE_LIMITS.min && value <= POOL_SIZE_LIMITS.max) return { ok: true, value };
+  return { ok: false, error: { code: "invalid_pool_size", field, value: text, ...POOL_SIZE_LIMITS } };
+}
+
 type PoolMessage<T> =
   | { type: "progress"; id: number; fraction: number }
   | { type: "outcome"; id: number; outcome: ServiceOutcome<T> }

@@ -8,9 +8,9 @@ import { samplePool, SAMPLES_PER_RANGE } from "../lib/service/sample-pool";
  * potentials per temperature, problem structures, the drying map and transition humidities) and starts the JIT; after
  * two more unmeasured runs (JIT warm-up, as for the other benchmarks) the figure against the target is the median of five. The Monte Carlo figure includes one
  * deterministic assessment and the reference run of the samples' path; the per-sample figure subtracts the former.
- * The samples run in the process's sample pool (`lib/service/sample-pool.ts`, one worker thread per core, at most two),
- * as in the service: an unmeasured Monte Carlo run of two ranges first starts its workers (thread start, TypeScript
- * loading, data set, JIT), which a serving process pays once; that run is reported apart.
+ * The samples are shared by this thread and its sample workers (`lib/service/sample-pool.ts`, one fewer than the cores,
+ * up to two cores), as in the service: an unmeasured Monte Carlo run of two ranges first starts the workers (thread
+ * start, TypeScript loading, data set, JIT), which a serving thread pays once; that run is reported apart.
  */
 export async function run(): Promise<Record<string, unknown>> {
   if (!loadDataset().ok) throw new Error("data set invalid");
@@ -37,7 +37,7 @@ export async function run(): Promise<Record<string, unknown>> {
   const monteCarloStart = await time({ ...input, options: { sweepPoints: 40, monteCarlo: { samples: 2 * SAMPLES_PER_RANGE, seed: 2 } } });
   const monteCarlo = await time({ ...input, options: { sweepPoints: 40, monteCarlo: { samples, seed: 1 } } });
   const sampleWorkers = samplePool().size;
-  await samplePool().pool.close();
+  await samplePool().pool?.close();
   const round = (ms: number) => Math.round(ms);
   return {
     fullAssessment40PointsFirstRunMs: round(first),

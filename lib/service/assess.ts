@@ -9,7 +9,8 @@ import { formatIssues } from "../schema/format-issues";
 import { assessWithDataset, binderSystemOf, type AssessmentResult } from "./assessment-core";
 import { assessSample, samplePathReference, type SampleValue } from "./assessment-samples";
 import { domainError, validationError, type ServiceOutcome } from "./outcome";
-import { samplePool, samplesInWorkers, SAMPLES_PER_RANGE } from "./sample-pool";
+import { computeSamples, samplePool, SAMPLES_PER_RANGE } from "./sample-pool";
+import type { WarmStartBook } from "../scenarios/sweep";
 
 export type { AssessmentResult, AssessmentScenarios } from "./assessment-core";
 
@@ -19,10 +20,10 @@ export type AssessmentOptions = {
   /** A data set other than the one loaded from `lib/data` (tests, sensitivity studies). */
   dataset?: Dataset;
   /**
-   * Worker threads for the Monte Carlo samples; default: the process's sample pool (`sample-pool.ts`,
-   * HYDRASTATE_SAMPLE_WORKERS). With 1, or fewer than two ranges of samples, they are computed in this thread.
+   * 0: compute the Monte Carlo samples in this thread alone. By default the thread's sample workers
+   * (`sample-pool.ts`, HYDRASTATE_SAMPLE_WORKERS) help when there are at least two ranges of samples.
    */
-  sampleWorkers?: number;
+  sampleWorkers?: 0;
 };
 
 /**
@@ -86,30 +87,26 @@ export async function runAssessment(raw: unknown, options: AssessmentOptions = {
 }
 
 /**
- * The Monte Carlo samples in index order: in the sample pool's worker threads when there are several workers and at
- * least two ranges of samples, else (or when the workers cannot run, logged) in this thread. Either way the values are
- * the same (`assessment-samples.ts`).
+ * The Monte Carlo samples in index order, computed in this thread and, beside it, in the thread's sample workers
+ * (`sample-pool.ts`) when there are at least two ranges of samples. Either way the values are the same
+ * (`assessment-samples.ts`).
  */
 async function monteCarloSamples(input: AssessInput, dataset: Dataset, samples: number, seed: number, options: AssessmentOptions): Promise<ServiceOutcome<SampleValue[]>> {
-  const progress = (completed: number) => options.onProgress?.(0.05 + (0.95 * completed) / samples);
-  const shared = options.sampleWorkers === 1 ? undefined : samplePool();
-  if (shared && shared.size > 1 && samples >= 2 * SAMPLES_PER_RANGE) {
-    // The workers load the data set themselves unless it is the caller's own.
-    const own = options.dataset !== undefined;
-    const inWorkers = await samplesInWorkers(shared.pool, { input, seed, datasetVersion: dataset.version, dataset: own ? dataset : undefined }, samples, { signal: options.signal, onSamplesDone: progress });
-    if (inWorkers.ok || inWorkers.error.kind !== "domain" || !["sample_worker_failed", "dataset_mismatch"].includes(inWorkers.error.code)) return inWorkers;
-    console.error(JSON.stringify({ level: "warn", event: "sample_workers_unavailable", reason: inWorkers.error.message, fallback: "this thread" }));
-  }
   const binder = binderSystemOf(input);
   if (!binder.ok) return binder;
-  const reference = samplePathReference(input, binder.value, dataset);
-  const values: SampleValue[] = [];
-  for (let i = 0; i < samples; i++) {
-    if (options.signal?.aborted) return domainError("cancelled", `cancelled after ${i} of ${samples} samples`, { completedSamples: i });
-    values.push(assessSample(input, binder.value, dataset, reference, seed, i));
-    progress(i + 1);
-    // Let the event loop breathe so that progress polling and cancellation get through.
-    if (i % 5 === 4) await new Promise((resolve) => setImmediate(resolve));
-  }
-  return { ok: true, value: values };
+  // This thread's reference path, computed when it takes its first sample (the workers compute their own).
+  let reference: { book: WarmStartBook | undefined } | undefined;
+  const sampleHere = (index: number) => {
+    reference ??= { book: samplePathReference(input, binder.value, dataset) };
+    return assessSample(input, binder.value, dataset, reference.book, seed, index);
+  };
+  const useWorkers = options.sampleWorkers !== 0 && samples >= 2 * SAMPLES_PER_RANGE;
+  return computeSamples(samples, {
+    workers: useWorkers ? samplePool() : undefined,
+    // The workers load the data set themselves unless it is the caller's own.
+    request: { input, seed, datasetVersion: dataset.version, dataset: options.dataset },
+    sampleHere,
+    signal: options.signal,
+    onSamplesDone: (completed) => options.onProgress?.(0.05 + (0.95 * completed) / samples),
+  });
 }

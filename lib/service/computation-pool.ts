@@ -37,12 +37,20 @@ export const POOL_SIZE_LIMITS = { min: 1, max: 16 } as const;
 
 export type PoolSizeError<F extends string = string> = { code: "invalid_pool_size"; field: F; value: string; min: number; max: number };
 
-/** A pool size from an environment variable's text: unset or empty gives the default; anything but an integer in the limits is an error naming the variable. */
-export function poolSizeFrom<F extends string>(field: F, text: string | undefined, defaultSize: number): { ok: true; value: number } | { ok: false; error: PoolSizeError<F> } {
+/**
+ * A pool size from an environment variable's text: unset or empty gives the default; anything but an integer within
+ * the limits (default POOL_SIZE_LIMITS) is an error naming the variable.
+ */
+export function poolSizeFrom<F extends string>(
+  field: F,
+  text: string | undefined,
+  defaultSize: number,
+  limits: { min: number; max: number } = POOL_SIZE_LIMITS,
+): { ok: true; value: number } | { ok: false; error: PoolSizeError<F> } {
   if (text === undefined || text.trim() === "") return { ok: true, value: defaultSize };
   const value = Number(text);
-  if (Number.isInteger(value) && value >= POOL_SIZE_LIMITS.min && value <= POOL_SIZE_LIMITS.max) return { ok: true, value };
-  return { ok: false, error: { code: "invalid_pool_size", field, value: text, ...POOL_SIZE_LIMITS } };
+  if (Number.isInteger(value) && value >= limits.min && value <= limits.max) return { ok: true, value };
+  return { ok: false, error: { code: "invalid_pool_size", field, value: text, min: limits.min, max: limits.max } };
 }
 
 type PoolMessage<T> =

@@ -1,4 +1,3 @@
-import { setMaxListeners } from "node:events";
 import { availableParallelism } from "node:os";
 import type { SampleRange, SampleValue } from "./assessment-samples";
 import { createComputationPool, poolSizeFrom, type ComputationPool, type PoolSizeError } from "./computation-pool";
@@ -7,38 +6,46 @@ import { processWide } from "./process-wide";
 import type { WorkerModule } from "./worker-job-runner";
 
 /**
- * The worker threads that compute the Monte Carlo samples of an assessment in parallel (`runAssessment`). Samples are
- * sent in ranges of SAMPLES_PER_RANGE to a long-lived pool (`computation-pool.ts`); each worker keeps the run's binder
- * and reference path between ranges (`assessment-samples.ts`), and the values come back merged by index, so the result
- * equals the one computed in a single thread.
+ * The Monte Carlo samples of an assessment (`runAssessment`), computed in ranges of SAMPLES_PER_RANGE by the thread
+ * that runs the assessment and, beside it, by the long-lived worker threads of a sample pool (`computation-pool.ts`).
+ * Each thread takes the next range when it is free, so a worker that is still starting takes fewer; each worker keeps
+ * the run's binder and reference path between ranges (`assessment-samples.ts`). The values are merged by index, so
+ * the result equals the one computed in a single thread, whatever the number of workers.
  */
 export const SAMPLE_WORKERS_ENV = "HYDRASTATE_SAMPLE_WORKERS";
 
-/** Default workers: one per core, at most two (the service machines have 2 cores; more would only queue). */
+/** Sample workers accepted: 0 (the computing thread alone) to 16, a bound against typing errors (common practice). */
+export const SAMPLE_WORKER_LIMITS = { min: 0, max: 16 } as const;
+
+/**
+ * Default sample workers: one fewer than the cores, up to two cores (the service machines have 2): the computing
+ * thread takes its share, so one worker fills a 2-core machine.
+ */
 export function defaultSampleWorkers(): number {
-  return Math.min(2, availableParallelism());
+  return Math.min(2, availableParallelism()) - 1;
 }
 
 /**
  * Samples per range: enough that a range outweighs its message round trip (a sample takes about 50–90 ms), few enough
- * that ranges share the workers evenly and progress moves.
+ * that ranges share the threads evenly and progress moves.
  */
 export const SAMPLES_PER_RANGE = 10;
 
 export const sampleWorkerModule: WorkerModule = { modulePath: "lib/service/assessment-samples.ts", exportName: "runSampleRange" };
 
 export function sampleWorkersFrom(text: string | undefined): { ok: true; value: number } | { ok: false; error: PoolSizeError<typeof SAMPLE_WORKERS_ENV> } {
-  return poolSizeFrom(SAMPLE_WORKERS_ENV, text, defaultSampleWorkers());
+  return poolSizeFrom(SAMPLE_WORKERS_ENV, text, defaultSampleWorkers(), SAMPLE_WORKER_LIMITS);
 }
 
-export type SamplePool = { size: number; pool: ComputationPool<SampleValue[]> };
+/** The sample workers of a thread: `size` workers in `pool` (none when `size` is 0). */
+export type SamplePool = { size: number; pool?: ComputationPool<SampleValue[]> };
 
-/** The process-wide sample pool; an invalid HYDRASTATE_SAMPLE_WORKERS is reported in one log line and the default is used. */
+/** One sample pool per thread; an invalid HYDRASTATE_SAMPLE_WORKERS is reported in one log line and the default is used. */
 const shared = processWide("hydrastate.samplePool", (): SamplePool => {
   const size = sampleWorkersFrom(process.env[SAMPLE_WORKERS_ENV]);
   if (!size.ok) console.error(JSON.stringify({ level: "warn", ...size.error, using: defaultSampleWorkers() }));
   const workers = size.ok ? size.value : defaultSampleWorkers();
-  return { size: workers, pool: createComputationPool<SampleValue[]>(sampleWorkerModule, { size: workers }) };
+  return { size: workers, pool: workers > 0 ? createComputationPool<SampleValue[]>(sampleWorkerModule, { size: workers }) : undefined };
 });
 
 export function samplePool(): SamplePool {
@@ -50,51 +57,79 @@ export function setSamplePool(replacement: SamplePool | undefined): SamplePool |
   return shared.replace(replacement);
 }
 
+export type SampleLanes = {
+  /** The sample workers to use beside this thread (none: this thread alone). */
+  workers?: SamplePool;
+  /** What a worker needs besides its range. */
+  request: Omit<SampleRange, "from" | "to">;
+  /** Sample i in this thread. */
+  sampleHere: (index: number) => SampleValue;
+  signal?: AbortSignal;
+  onSamplesDone?: (completed: number) => void;
+};
+
 /**
- * Samples 0 … samples − 1 in the pool's workers, in ranges, values in index order. The first failed range (an error
- * outcome, a worker that stopped) cancels the others and is returned: a thrown worker failure as the domain error
- * `sample_worker_failed`, which the caller may answer by computing in its own thread.
+ * Samples 0 … samples − 1 in index order, computed by this thread and the workers, a range at a time each. A worker
+ * that fails (it cannot start, it stops) leaves its range to the others and takes no more, with one log line: the
+ * run still completes, in this thread if need be. Cancelling stops every thread and gives the `cancelled` error with
+ * the number of samples done.
  */
-export async function samplesInWorkers(
-  pool: ComputationPool<SampleValue[]>,
-  request: Omit<SampleRange, "from" | "to">,
-  samples: number,
-  options: { signal?: AbortSignal; onSamplesDone?: (completed: number) => void } = {},
-): Promise<ServiceOutcome<SampleValue[]>> {
-  const stopAll = new AbortController();
-  const ranges: { from: number; to: number }[] = [];
-  for (let from = 0; from < samples; from += SAMPLES_PER_RANGE) ranges.push({ from, to: Math.min(samples, from + SAMPLES_PER_RANGE) });
-  // Every range listens to the one signal (the default limit of 10 listeners would warn from 11 ranges).
-  setMaxListeners(ranges.length + 1, stopAll.signal);
-  const stop = () => stopAll.abort();
-  options.signal?.addEventListener("abort", stop, { once: true });
-  if (options.signal?.aborted) stop();
+export async function computeSamples(samples: number, lanes: SampleLanes): Promise<ServiceOutcome<SampleValue[]>> {
+  const pending: { from: number; to: number }[] = [];
+  for (let from = 0; from < samples; from += SAMPLES_PER_RANGE) pending.push({ from, to: Math.min(samples, from + SAMPLES_PER_RANGE) });
+  const values = new Array<SampleValue>(samples);
   let completed = 0;
-  let firstFailure: ServiceOutcome<SampleValue[]> | undefined;
+  const stopWorkers = new AbortController();
+  const cancel = () => stopWorkers.abort();
+  lanes.signal?.addEventListener("abort", cancel, { once: true });
+  const cancelled = () => lanes.signal?.aborted === true;
+  const done = (count: number) => {
+    completed += count;
+    lanes.onSamplesDone?.(completed);
+  };
+
+  const here = async () => {
+    for (let range = pending.shift(); range && !cancelled(); range = pending.shift()) {
+      for (let i = range.from; i < range.to && !cancelled(); i++) {
+        values[i] = lanes.sampleHere(i);
+        done(1);
+        // Yield after every sample: progress and cancellation get through, and a worker's finished range is answered.
+        await new Promise((resolve) => setImmediate(resolve));
+      }
+    }
+  };
+  let loggedFailure = false;
+  const worker = async (pool: ComputationPool<SampleValue[]>) => {
+    for (let range = pending.shift(); range && !cancelled(); range = pending.shift()) {
+      let outcome: ServiceOutcome<SampleValue[]>;
+      try {
+        outcome = await pool.run({ ...lanes.request, ...range }, { signal: stopWorkers.signal });
+      } catch (caught) {
+        outcome = domainError("sample_worker_failed", caught instanceof Error ? caught.message : String(caught));
+      }
+      if (cancelled()) return;
+      if (!outcome.ok || outcome.value.length !== range.to - range.from) {
+        pending.unshift(range);
+        if (!loggedFailure) {
+          loggedFailure = true;
+          const reason = outcome.ok ? "a range came back with the wrong number of samples" : outcome.error.kind === "domain" ? outcome.error.message : "invalid range";
+          console.error(JSON.stringify({ level: "warn", event: "sample_worker_failed", reason, fallback: "the other threads" }));
+        }
+        return;
+      }
+      outcome.value.forEach((value, k) => (values[range.from + k] = value));
+      done(range.to - range.from);
+    }
+  };
+
   try {
-    const outcomes = await Promise.all(
-      ranges.map(async (range) => {
-        let outcome: ServiceOutcome<SampleValue[]>;
-        try {
-          outcome = await pool.run({ ...request, ...range }, { signal: stopAll.signal });
-        } catch (caught) {
-          outcome = domainError("sample_worker_failed", caught instanceof Error ? caught.message : String(caught));
-        }
-        if (!outcome.ok) {
-          // The caller's cancellation is the answer whichever range noticed it first.
-          if (!firstFailure && !options.signal?.aborted) firstFailure = outcome;
-          stop();
-        } else {
-          completed += range.to - range.from;
-          options.onSamplesDone?.(completed);
-        }
-        return outcome;
-      }),
-    );
-    if (options.signal?.aborted) return domainError("cancelled", `cancelled after ${completed} of ${samples} samples`, { completedSamples: completed });
-    if (firstFailure) return firstFailure;
-    return { ok: true, value: outcomes.flatMap((o) => (o.ok ? o.value : [])) };
+    const workerLanes = Array.from({ length: lanes.workers?.pool ? lanes.workers.size : 0 }, () => worker(lanes.workers!.pool!));
+    await Promise.all([here(), ...workerLanes]);
+    // Ranges a failing worker gave back after this thread had finished.
+    await here();
+    if (cancelled()) return domainError("cancelled", `cancelled after ${completed} of ${samples} samples`, { completedSamples: completed });
+    return { ok: true, value: values };
   } finally {
-    options.signal?.removeEventListener("abort", stop);
+    lanes.signal?.removeEventListener("abort", cancel);
   }
 }

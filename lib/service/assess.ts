@@ -1,5 +1,6 @@
 import packageJson from "../../package.json";
 import { cautionTextsFor } from "../advisory/cautions";
+import { culvertDemo } from "../demo/culvert-demo";
 import { sortFlags } from "../advisory/flag";
 import { summarise, flagRobustness } from "../advisory/sample-statistics";
 import { loadDataset, type Dataset } from "../data/load-dataset";
@@ -109,4 +110,12 @@ async function monteCarloSamples(input: AssessInput, dataset: Dataset, samples: 
     signal: options.signal,
     onSamplesDone: (completed) => options.onProgress?.(0.05 + (0.95 * completed) / samples),
   });
+}
+
+/**
+ * A pool worker's warm-up (`ComputationPool.warm`, at server start): one assessment of the demo loads the data set and
+ * compiles the engine's code, which the first request would otherwise wait for (about 2–3 s on the service machines).
+ */
+export async function warmUp(): Promise<void> {
+  await runAssessment(culvertDemo);
 }

@@ -23,6 +23,12 @@ export type ComputationPool<T> = {
   /** The module's function applied to `raw` in a pool worker. */
   run(raw: unknown, options?: PoolRunOptions): Promise<ServiceOutcome<T>>;
   stats(): PoolStats;
+  /**
+   * Starts the workers now, up to the pool's size, and has each load its module and run the module's `warmUp` export
+   * if it has one (a server calls this at start, so that the first request does not wait for it). Missing worker
+   * files are left for the first request to report.
+   */
+  warm(): void;
   /** Cancels every queued and running request and terminates the workers; a later `run` starts new ones. */
   close(): Promise<void>;
 };
@@ -190,6 +196,15 @@ export function createComputationPool<T>(module: WorkerModule, options: Computat
         queue.push(request);
         dispatch();
       });
+    },
+    warm() {
+      while (slots.size < size) {
+        const files = resolveWorkerFiles(module);
+        if (!files.ok) return;
+        const slot = startWorker(files.modulePath);
+        slot.worker.unref();
+        slot.worker.postMessage({ warm: true });
+      }
     },
     stats() {
       const all = [...slots];

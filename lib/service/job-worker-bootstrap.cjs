@@ -15,15 +15,32 @@ function post(message) {
 /** Only the message crosses to the main thread, never the stack. */
 const messageOf = (caught) => (caught instanceof Error ? caught.message : String(caught));
 
-/** The module's function, loaded on first use (a pool worker keeps it, with the data set it loads, for later requests). */
-let loadedRun;
+/** The module, loaded on first use (a pool worker keeps it, with the data set it loads, for later requests). */
+let loadedModule;
+function loadModule() {
+  loadedModule ??= requireTypeScript(workerData.modulePath, __filename);
+  return loadedModule;
+}
+
+/** The module's function. */
 function computation() {
-  if (loadedRun) return loadedRun;
-  const loaded = requireTypeScript(workerData.modulePath, __filename);
-  const run = loaded[workerData.exportName];
+  const run = loadModule()[workerData.exportName];
   if (typeof run !== "function") throw new Error(`${workerData.modulePath} has no function ${workerData.exportName}`);
-  loadedRun = run;
   return run;
+}
+
+/**
+ * A pool worker's warm-up (`ComputationPool.warm`): load the module and run its `warmUp` export, if it has one, so
+ * that the first request finds the code compiled. Nothing is answered; a failure here shows again, reported, at the
+ * first request.
+ */
+async function warmUp() {
+  try {
+    const warm = loadModule().warmUp;
+    if (typeof warm === "function") await warm();
+  } catch {
+    // reported by the first request
+  }
 }
 
 /** A job: one computation of `workerData.raw`; messages `{ type: "progress", fraction }`, then one `{ type: "outcome", outcome }` or `{ type: "error", message }`. */
@@ -35,9 +52,11 @@ async function runJob() {
 /**
  * A pool worker: computes each `{ id, raw }` it is sent, one at a time, and answers with the same messages
  * carrying the request's `id`. A failure (or an outcome that cannot cross threads) answers only that request.
+ * `{ warm: true }` asks for the warm-up.
  */
 function servePool() {
-  parentPort.on("message", async ({ id, raw }) => {
+  parentPort.on("message", async ({ id, raw, warm }) => {
+    if (warm) return warmUp();
     try {
       const outcome = await computation()(raw, { onProgress: (fraction) => post({ type: "progress", id, fraction }) });
       post({ type: "outcome", id, outcome });

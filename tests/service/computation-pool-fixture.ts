@@ -21,6 +21,11 @@ export type FixtureResult = { tag: string; ran: string[]; threadId: number };
 
 const ran: string[] = [];
 
+/** The pool's warm-up (`ComputationPool.warm`): recorded like a request, as "warm-up". */
+export function warmUp() {
+  ran.push("warm-up");
+}
+
 /** Records the tag, reports that it started (progress 0), then does its action; answers with the tags this worker has run. */
 export async function act(raw: unknown, { onProgress }: Progress) {
   const request = raw as FixtureRequest;

@@ -89,6 +89,16 @@ describe("the computation pool", () => {
     expect(pool.stats()).toEqual({ workers: 1, busy: 0, queued: 0 });
   });
 
+  it("warms up: starts its workers at once, each runs the module's warmUp export before the first request, and a second warm-up starts no more", async () => {
+    const { pool, run } = fixturePool(2);
+    pool.warm();
+    expect(pool.stats()).toEqual({ workers: 2, busy: 0, queued: 0 });
+    pool.warm();
+    expect(pool.stats().workers).toBe(2);
+    const first = valueOf(await run({ action: "busy", tag: "first", ms: 1 }));
+    expect(first.ran).toEqual(["warm-up", "first"]);
+  });
+
   it("never runs a request cancelled while it waits in the queue", async () => {
     const { pool, run } = fixturePool();
     const running = run({ action: "busy", tag: "running", ms: 200 });

@@ -49,7 +49,8 @@ export function FlagList({ flags }: { flags: readonly Flag[] }) {
             ) : null}
             {flag.robustness ? (
               <p className="robustness">
-                Raised in {percent(flag.robustness.firedFraction)} of {flag.robustness.samples} Monte Carlo samples.
+                Raised in {percent(flag.robustness.firedFraction)} of {flag.robustness.samples} Monte Carlo samples
+                {flag.robustness.notEvaluated ? ` (${flag.robustness.notEvaluated} more could not evaluate it: its scenario did not converge there)` : ""}.
               </p>
             ) : null}
           </li>

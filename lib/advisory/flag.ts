@@ -29,6 +29,8 @@ export type FlagRobustness = {
   firedFraction: number;
   /** Number of samples evaluated. */
   samples: number;
+  /** Samples that could not evaluate the flag (its scenario failed there), left out of `samples`; absent when none. */
+  notEvaluated?: number;
 };
 
 export type Flag = {

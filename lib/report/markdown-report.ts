@@ -1,5 +1,5 @@
 import type { ReportModel, ReportTable } from "./report-model";
-import { chartTable, formatCell } from "./report-model";
+import { chartTable, formatCell, robustnessSentence } from "./report-model";
 
 /** Escapes the characters that would break a Markdown table cell. */
 function cell(text: string): string {
@@ -48,7 +48,7 @@ export function renderMarkdownReport(model: ReportModel): string {
   if (model.flags.length === 0) lines.push("No flags were raised.", "");
   for (const flag of model.flags) {
     lines.push(`### ${flag.severity.toUpperCase()}: ${flag.title}`, "", flag.explanation, "", `Basis: ${flag.basis}`, "");
-    if (flag.robustness) lines.push(`Fired in ${formatCell(flag.robustness.firedFraction * 100)} % of ${flag.robustness.samples} Monte Carlo samples.`, "");
+    if (flag.robustness) lines.push(robustnessSentence(flag.robustness), "");
     if (flag.actions.length > 0) lines.push("Actions:", ...flag.actions.map((a) => `- ${a}`), "");
   }
   lines.push("## Cautions", "", ...model.cautions.map((c) => `- ${c}`), "");

@@ -2,7 +2,7 @@ import PDFDocument from "pdfkit";
 import { drawChart } from "./pdf-chart";
 import { pdfSafe } from "./pdf-text";
 import type { ReportModel, ReportTable } from "./report-model";
-import { chartTable, formatCell } from "./report-model";
+import { chartTable, formatCell, robustnessSentence } from "./report-model";
 
 export type PdfOptions = {
   /** Deflate page streams (default true); tests turn it off to read the text. */
@@ -182,7 +182,7 @@ export function renderPdfReport(model: ReportModel, options: PdfOptions = {}): P
     doc.font("Helvetica-Bold").fontSize(9).text(pdfSafe(`${flag.severity.toUpperCase()}: ${flag.title}`));
     paragraph(doc, flag.explanation, 8);
     paragraph(doc, `Basis: ${flag.basis}`, 8);
-    if (flag.robustness) paragraph(doc, `Fired in ${formatCell(flag.robustness.firedFraction * 100)} % of ${flag.robustness.samples} Monte Carlo samples.`, 8);
+    if (flag.robustness) paragraph(doc, robustnessSentence(flag.robustness), 8);
     for (const action of flag.actions) paragraph(doc, `• ${action}`, 8);
     doc.moveDown(0.4);
   }

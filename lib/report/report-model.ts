@@ -1,7 +1,7 @@
 import type { ChartData } from "../charts/chart-data";
 import { axisCaption } from "../charts/chart-data";
 import { phaseLabel, withPhaseLabels } from "../charts/phase-labels";
-import type { Flag } from "../advisory/flag";
+import type { Flag, FlagRobustness } from "../advisory/flag";
 import { sortFlags } from "../advisory/flag";
 import type { DatasetFileInfo } from "../data/dataset";
 import type { SavedAssessment, Versions } from "../store/assessment-store";
@@ -62,6 +62,12 @@ export function formatCell(value: unknown): string {
   if (typeof value === "boolean") return value ? "yes" : "no";
   const json = JSON.stringify(value);
   return json === "[]" || json === "{}" ? "(none)" : json;
+}
+
+/** How often a flag fired in the Monte Carlo samples, as a report sentence. */
+export function robustnessSentence(robustness: FlagRobustness): string {
+  const skipped = robustness.notEvaluated ? ` (${robustness.notEvaluated} more could not evaluate it: its scenario did not converge there)` : "";
+  return `Fired in ${formatCell(robustness.firedFraction * 100)} % of ${robustness.samples} Monte Carlo samples${skipped}.`;
 }
 
 /** The rows of a chart as a table (x column, then every series with its unit). */

@@ -1,14 +1,12 @@
 import packageJson from "../../package.json";
 import { cautionTextsFor } from "../advisory/cautions";
 import { culvertDemo } from "../demo/culvert-demo";
-import { sortFlags } from "../advisory/flag";
-import { summarise, flagRobustness } from "../advisory/sample-statistics";
 import { loadDataset, type Dataset } from "../data/load-dataset";
 import { phaseIds } from "../equilibrium/equilibrate";
 import { assessInput, type AssessInput } from "../schema/assess-input";
 import { formatIssues } from "../schema/format-issues";
 import { assessWithDataset, binderSystemOf, type AssessmentResult } from "./assessment-core";
-import { assessSample, samplePathReference, type SampleValue } from "./assessment-samples";
+import { assessSample, samplePathReference, summariseSamples, type SampleValue } from "./assessment-samples";
 import { domainError, validationError, type ServiceOutcome } from "./outcome";
 import { computeSamples, samplePool, SAMPLES_PER_RANGE } from "./sample-pool";
 import type { WarmStartBook } from "../scenarios/sweep";
@@ -59,30 +57,9 @@ export async function runAssessment(raw: unknown, options: AssessmentOptions = {
     const { samples, seed } = input.options.monteCarlo;
     const values = await monteCarloSamples(input, loaded.value, samples, seed, options);
     if (!values.ok) return values;
-    const volumes: Record<string, number[]> = {};
-    const fired: Record<string, boolean[]> = {};
-    let failed = 0;
-    for (const value of values.value) {
-      if (!value) {
-        failed++;
-        continue;
-      }
-      for (const [id, v] of Object.entries(value.volumesCm3)) (volumes[id] ??= []).push(v);
-      const ids = new Set(value.firedFlagIds);
-      for (const flag of result.flags) (fired[flag.id] ??= []).push(ids.has(flag.id));
-    }
-    result.uncertainty = {
-      samples,
-      seed,
-      failedSamples: failed,
-      phaseVolumesCm3: Object.fromEntries(
-        Object.entries(volumes).map(([id, values]) => {
-          const s = summarise(values);
-          return [id, { p5: s.p5, p50: s.p50, p95: s.p95, mean: s.mean }];
-        }),
-      ),
-    };
-    result.flags = sortFlags(result.flags.map((flag) => (fired[flag.id]?.length ? { ...flag, robustness: flagRobustness(fired[flag.id]) } : flag)));
+    const summary = summariseSamples(result.flags, values.value);
+    result.uncertainty = { samples, seed, failedSamples: summary.failedSamples, phaseVolumesCm3: summary.phaseVolumesCm3 };
+    result.flags = summary.flags;
   }
   return { ok: true, value: result };
 }

@@ -69,6 +69,22 @@ export type AssessmentResult = {
   versions: { dataset: string; engine: string };
 };
 
+/**
+ * The scenario each scenario flag is computed from (the other flags need only the base paste, the exposure or the
+ * curing model). A Monte Carlo sample whose scenario failed has not evaluated its flags: they are left out of those
+ * flags' fired fractions rather than counted as not fired.
+ */
+export const SCENARIO_OF_FLAG: Readonly<Record<string, keyof AssessmentScenarios>> = {
+  "sulfate-attack": "sulfate",
+  "gypsum-formation": "sulfate",
+  "magnesium-sulfate-attack": "sulfate",
+  "carbonation-depassivation": "carbonation",
+  "delayed-ettringite-formation": "temperature",
+  "thaumasite-formation": "thaumasite",
+  "chloride-binding-limit": "chloride",
+  "ettringite-dehydration": "drying",
+};
+
 /** Sweep points of the Monte Carlo samples (each sample reruns every scenario; fewer points keep it tractable). */
 export const MONTE_CARLO_SWEEP_POINTS = 8;
 

@@ -1,9 +1,11 @@
+import { sortFlags, type Flag } from "../advisory/flag";
 import { createRng } from "../advisory/random";
+import { flagRobustness, summarise } from "../advisory/sample-statistics";
 import type { BinderSystem } from "../cement/binder-system";
 import { loadDataset, type Dataset } from "../data/load-dataset";
 import { newWarmStartBook, readingBook, type WarmStartBook } from "../scenarios/sweep";
 import { assessInput, type AssessInput } from "../schema/assess-input";
-import { assessWithDataset, binderSystemOf, MONTE_CARLO_SWEEP_POINTS } from "./assessment-core";
+import { assessWithDataset, binderSystemOf, MONTE_CARLO_SWEEP_POINTS, SCENARIO_OF_FLAG, type AssessmentResult } from "./assessment-core";
 import { domainError, type ServiceOutcome } from "./outcome";
 import { sampleDataset } from "./perturbed-dataset";
 
@@ -18,8 +20,12 @@ import { sampleDataset } from "./perturbed-dataset";
  * equilibrium from the reference at the same point (same composition and temperature, perturbed potentials).
  */
 
-/** One sample's contribution: the base paste's phase volumes (cm³ per 100 g binder) and the ids of the flags it raised as caution or warning; null when its assessment failed. */
-export type SampleValue = { volumesCm3: Record<string, number>; firedFlagIds: string[] } | null;
+/**
+ * One sample's contribution: the base paste's phase volumes (cm³ per 100 g binder), the ids of the flags it raised as
+ * caution or warning, and the scenarios that failed in it (their flags were not evaluated, `SCENARIO_OF_FLAG`); null
+ * when its assessment failed as a whole.
+ */
+export type SampleValue = { volumesCm3: Record<string, number>; firedFlagIds: string[]; failedScenarios: string[] } | null;
 
 /** The warm starts of the samples' path, from its reference run (undefined when that run fails: the samples then start cold). */
 export function samplePathReference(input: AssessInput, binder: BinderSystem, dataset: Dataset): WarmStartBook | undefined {
@@ -32,7 +38,51 @@ export function assessSample(input: AssessInput, binder: BinderSystem, dataset: 
   const sampled = sampleDataset(dataset, createRng(seed, index));
   const run = assessWithDataset(input, binder, sampled, { points: MONTE_CARLO_SWEEP_POINTS, withTimeline: false, book: reference, reduced: true });
   if (!run.ok) return null;
-  return { volumesCm3: run.value.assemblage.paste.volumes, firedFlagIds: run.value.flags.filter((f) => f.severity !== "info").map((f) => f.id) };
+  return {
+    volumesCm3: run.value.assemblage.paste.volumes,
+    firedFlagIds: run.value.flags.filter((f) => f.severity !== "info").map((f) => f.id),
+    failedScenarios: Object.keys(run.value.scenarioErrors),
+  };
+}
+
+/**
+ * The samples' statistics: P5/P50/P95 and mean of each phase volume over the samples that succeeded, and each flag of
+ * the deterministic run with its fired fraction over the samples that evaluated it (a sample whose flag scenario
+ * failed is counted in `notEvaluated`, not as not fired), flags sorted again by severity and robustness.
+ */
+export function summariseSamples(
+  flags: readonly Flag[],
+  values: readonly SampleValue[],
+): { failedSamples: number; phaseVolumesCm3: NonNullable<AssessmentResult["uncertainty"]>["phaseVolumesCm3"]; flags: Flag[] } {
+  const volumes: Record<string, number[]> = {};
+  const fired: Record<string, boolean[]> = {};
+  const notEvaluated: Record<string, number> = {};
+  let failedSamples = 0;
+  for (const value of values) {
+    if (!value) {
+      failedSamples++;
+      continue;
+    }
+    for (const [id, v] of Object.entries(value.volumesCm3)) (volumes[id] ??= []).push(v);
+    const ids = new Set(value.firedFlagIds);
+    for (const flag of flags) {
+      const scenario = SCENARIO_OF_FLAG[flag.id];
+      if (scenario && value.failedScenarios.includes(scenario)) notEvaluated[flag.id] = (notEvaluated[flag.id] ?? 0) + 1;
+      else (fired[flag.id] ??= []).push(ids.has(flag.id));
+    }
+  }
+  const phaseVolumesCm3 = Object.fromEntries(
+    Object.entries(volumes).map(([id, series]) => {
+      const s = summarise(series);
+      return [id, { p5: s.p5, p50: s.p50, p95: s.p95, mean: s.mean }];
+    }),
+  );
+  const withRobustness = flags.map((flag) => {
+    if (!fired[flag.id]?.length) return flag;
+    const skipped = notEvaluated[flag.id];
+    return { ...flag, robustness: { ...flagRobustness(fired[flag.id]), ...(skipped ? { notEvaluated: skipped } : {}) } };
+  });
+  return { failedSamples, phaseVolumesCm3, flags: sortFlags(withRobustness) };
 }
 
 /** A range of samples for a worker thread: samples `from` (inclusive) to `to` (exclusive). */

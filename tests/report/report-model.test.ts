@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { buildReportModel, chartTable, formatCell } from "../../lib/report/report-model";
+import { buildReportModel, chartTable, formatCell, robustnessSentence } from "../../lib/report/report-model";
 import { sampleCharts, sampleFiles, sampleSaved } from "./sample-assessment";
 
 const running = { dataset: "abc123", engine: "0.1.0" };
@@ -58,5 +58,12 @@ describe("formatCell", () => {
     expect(formatCell([])).toBe("(none)");
     expect(formatCell(null)).toBe("");
     expect(formatCell(true)).toBe("yes");
+  });
+});
+
+describe("robustnessSentence", () => {
+  it("gives the fired fraction and the samples, and the samples that could not evaluate the flag when there are any", () => {
+    expect(robustnessSentence({ firedFraction: 0.84, samples: 200 })).toBe("Fired in 84 % of 200 Monte Carlo samples.");
+    expect(robustnessSentence({ firedFraction: 0.5, samples: 190, notEvaluated: 10 })).toBe("Fired in 50 % of 190 Monte Carlo samples (10 more could not evaluate it: its scenario did not converge there).");
   });
 });

@@ -1,0 +1,41 @@
+import { describe, expect, it } from "vitest";
+import type { Flag } from "../../lib/advisory/flag";
+import { FLAG_IDS } from "../../lib/advisory/flag";
+import { SCENARIO_OF_FLAG } from "../../lib/service/assessment-core";
+import { summariseSamples, type SampleValue } from "../../lib/service/assessment-samples";
+
+const flag = (id: string, severity: Flag["severity"] = "warning"): Flag => ({ id, severity, title: id, explanation: "", basis: "", actions: [] });
+const sample = (fired: string[], failedScenarios: string[] = [], portlanditeCm3 = 10): SampleValue => ({ volumesCm3: { portlandite: portlanditeCm3 }, firedFlagIds: fired, failedScenarios });
+
+describe("the Monte Carlo samples' statistics", () => {
+  it("count a flag as fired or not only in the samples whose scenario for it ran; the others are reported as not evaluated", () => {
+    // Hand count: chloride-binding-limit fired in 2 of the 3 samples whose chloride scenario ran (the 4th failed there);
+    // exposure-class-noncompliance needs no scenario and is evaluated in all 4.
+    const values = [
+      sample(["chloride-binding-limit", "exposure-class-noncompliance"]),
+      sample(["exposure-class-noncompliance"], ["chloride"]),
+      sample(["chloride-binding-limit"]),
+      sample([]),
+    ];
+    const summary = summariseSamples([flag("chloride-binding-limit"), flag("exposure-class-noncompliance")], values);
+    const byId = Object.fromEntries(summary.flags.map((f) => [f.id, f.robustness]));
+    expect(byId["chloride-binding-limit"]).toEqual({ firedFraction: 2 / 3, samples: 3, reading: "uncertain", notEvaluated: 1 });
+    expect(byId["exposure-class-noncompliance"]).toEqual({ firedFraction: 0.5, samples: 4, reading: "uncertain" });
+  });
+
+  it("leave failed samples out of everything and count them", () => {
+    const summary = summariseSamples([flag("sulfate-attack")], [sample(["sulfate-attack"], [], 10), null, sample(["sulfate-attack"], [], 12)]);
+    expect(summary.failedSamples).toBe(1);
+    expect(summary.flags[0].robustness).toEqual({ firedFraction: 1, samples: 2, reading: "robust-fires" });
+    expect(summary.phaseVolumesCm3.portlandite.mean).toBeCloseTo(11, 12);
+  });
+
+  it("leave a flag without robustness when no sample evaluated it", () => {
+    const summary = summariseSamples([flag("thaumasite-formation")], [sample([], ["thaumasite"]), sample([], ["thaumasite"])]);
+    expect(summary.flags[0].robustness).toBeUndefined();
+  });
+
+  it("map only known flag ids to scenarios", () => {
+    for (const id of Object.keys(SCENARIO_OF_FLAG)) expect(FLAG_IDS as readonly string[]).toContain(id);
+  });
+});

@@ -258,8 +258,17 @@ function run(
     // brine) is tried next to it, not swapped: they coexist at the one water activity where they balance.
     const waterPairAfterCycling = allowWaterPairs && regularity === "dependent" && cycled && phaseSetRegularity(p, s, false) === "regular";
     if (regularity !== "regular" && !waterPairAfterCycling) {
-      // Phase rule: swap with a present phase whose removal restores a regular system.
+      // Phase rule: swap with a present phase whose removal restores a regular system. First the one the simplex ratio
+      // test names for this dependency; then any, in index order.
       let swapped = false;
+      const named = regularity === "dependent" ? dependentLeaving(p, s, best) : -1;
+      if (named >= 0) {
+        s.active[named] = 0;
+        if (phaseSetRegularity(p, s, true) === "regular") {
+          s.amount[named] = 0;
+          swapped = true;
+        } else s.active[named] = 1;
+      }
       for (let q = 0; q < p.phases.length && !swapped; q++) {
         if (q === best || !s.active[q] || p.phases[q].kind === "reservoir" || p.phases[q].kind === "aqueous") continue;
         s.active[q] = 0;
@@ -428,6 +437,56 @@ function phaseSetRegularity(p: EquilibriumProblem, s: SolverState, countSolvent:
   }
   const a = assemble(p, s);
   return solveInPlace(a.matrix, a.rhs, a.size, PHASE_ADDITION_PIVOT_TOLERANCE) ? "regular" : "ill-conditioned";
+}
+
+/**
+ * The present pure solid that must leave when pure solid `k`, just made active, is a linear combination of the present
+ * pure solids, fixed-pressure gases and (with a solution) water: its formula a_k = Σ c_q a_q. Forming t mol of k from
+ * them changes each n_q by −c_q·t, so, as in the ratio test of the simplex method (Dantzig 1963, Linear programming and
+ * extensions, ch. 7), the solid that reaches zero first, argmin n_q / c_q over c_q > 0, leaves; removing any other
+ * drives that one negative or leaves the removed one supersaturated, and the search cycles. −1 when no present solid
+ * is consumed (or k is not a pure solid). The coefficients solve the normal equations of the present formulas.
+ */
+function dependentLeaving(p: EquilibriumProblem, s: SolverState, k: number): number {
+  if (p.phases[k].kind !== "pure-solid") return -1;
+  const nE = p.elements.length;
+  const columns: { phase: number; species: number }[] = [];
+  for (let q = 0; q < p.phases.length; q++) {
+    if (q === k || !s.active[q]) continue;
+    const kind = p.phases[q].kind;
+    if (kind === "pure-solid" || kind === "reservoir") columns.push({ phase: q, species: p.phases[q].species[0] });
+    else if (kind === "aqueous" && p.water >= 0) columns.push({ phase: -1, species: p.water });
+  }
+  const m = columns.length;
+  if (m === 0) return -1;
+  const target = p.phases[k].species[0];
+  const normal = new Float64Array(m * m);
+  const rhs = new Float64Array(m);
+  for (let a = 0; a < m; a++) {
+    const ia = columns[a].species * nE;
+    for (let b = 0; b < m; b++) {
+      const ib = columns[b].species * nE;
+      let dot = 0;
+      for (let j = 0; j < nE; j++) dot += p.stoich[ia + j] * p.stoich[ib + j];
+      normal[a * m + b] = dot;
+    }
+    let dot = 0;
+    for (let j = 0; j < nE; j++) dot += p.stoich[ia + j] * p.stoich[target * nE + j];
+    rhs[a] = dot;
+  }
+  if (!solveInPlace(normal, rhs, m)) return -1;
+  let leaving = -1;
+  let smallest = Infinity;
+  for (let a = 0; a < m; a++) {
+    const q = columns[a].phase;
+    if (q < 0 || p.phases[q].kind !== "pure-solid" || !(rhs[a] > 1e-9)) continue;
+    const ratio = Math.max(0, s.amount[q]) / rhs[a];
+    if (ratio < smallest) {
+      smallest = ratio;
+      leaving = q;
+    }
+  }
+  return leaving;
 }
 
 /** A typical magnitude of a phase amount, to judge "negative" relative to the system size. */

@@ -22,10 +22,11 @@ export function defaultDatasetFiles(): string[] {
   const directory = dataDirectory();
   if (!directory) return [];
   const files: string[] = [];
+  // Read at run time from the source tree, not traced into the server bundle (the bundler would take the whole project).
   for (const folder of defaultFolders) {
-    const folderPath = path.join(directory, folder);
+    const folderPath = path.join(/*turbopackIgnore: true*/ directory, folder);
     if (!existsSync(folderPath)) continue;
-    for (const name of readdirSync(folderPath).filter((n) => n.endsWith(".json")).sort()) files.push(path.join(folderPath, name));
+    for (const name of readdirSync(folderPath).filter((n) => n.endsWith(".json")).sort()) files.push(path.join(/*turbopackIgnore: true*/ folderPath, name));
   }
   return files;
 }

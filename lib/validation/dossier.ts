@@ -76,9 +76,10 @@ export function readCheckFiles(root?: string): CheckFile[] {
   const files: CheckFile[] = [];
   for (const name of readdirSync(directory).filter((n) => n.endsWith(".json")).sort()) {
     try {
-      const parsed = checkFile.safeParse(JSON.parse(readFileSync(path.join(directory, name), "utf8")));
+      // Read at run time, not traced into the server bundle (the bundler would take the whole project).
+      const parsed = checkFile.safeParse(JSON.parse(readFileSync(path.join(/*turbopackIgnore: true*/ directory, name), "utf8")));
       // A record of a test file that no longer exists (renamed or removed) is stale: left out.
-      if (parsed.success && existsSync(path.join(root ?? process.cwd(), parsed.data.testFile))) files.push(parsed.data);
+      if (parsed.success && existsSync(path.join(/*turbopackIgnore: true*/ root ?? process.cwd(), parsed.data.testFile))) files.push(parsed.data);
     } catch {
       // a half-written file from an interrupted run: skipped
     }

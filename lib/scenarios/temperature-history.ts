@@ -66,7 +66,12 @@ export type StabilityLimit =
   /** The phase is absent at every temperature of the sweep (e.g. too little sulfate or aluminium). */
   | { kind: "absent-throughout"; fromC: number; toC: number }
   /** The root finding failed (an engine failure inside the bracket): the limit lies between these sweep temperatures. */
-  | { kind: "bracketed"; bracketC: [number, number]; failure: string };
+  | { kind: "bracketed"; bracketC: [number, number]; failure: string }
+  /**
+   * A Monte Carlo sample's limit, narrowed only until no decision temperature of its flags lies inside the bracket
+   * (`decisionTemperaturesC`): the limit lies in `bracketC`, and every value in it gives the flags the same answer.
+   */
+  | { kind: "decided"; bracketC: [number, number] };
 
 export type SulfateDistribution = {
   /** Sulfate of the whole paste, mol SO3 per 100 g binder. */
@@ -147,9 +152,15 @@ export type TemperatureHistoryOptions = {
   maxIterations?: number;
   /**
    * The reduced path of a Monte Carlo sample read from a `WarmStartBook`: no temperature grid, only the service and
-   * curing states, and the stability temperature by root finding from the reference run's (`stabilityLimitNear`).
+   * curing states, and the stability temperature by root finding from the reference run's (`stabilityLimitNear`), or,
+   * with `decisionTemperaturesC`, only as far as those decisions need (`decidedStabilityLimit`).
    */
   reduced?: boolean;
+  /**
+   * The temperatures at which the flags read from this scenario compare the curing temperature with the ettringite
+   * stability temperature (`defDecisionTemperaturesC` of the delayed-ettringite-formation flag). Used on the reduced path.
+   */
+  decisionTemperaturesC?: readonly number[];
 };
 
 /** ΔrG of precipitation from the saturation index: ΔrG = −RT ln10 · SI, kJ/mol per formula unit. */
@@ -253,6 +264,48 @@ export function byDistance(points: readonly { paste: HydratedPaste }[], temperat
 /** The warm starts for the next point of a chain: the latest pastes first (the chain runs in one direction). */
 export function recent(points: readonly { paste: HydratedPaste }[], extra: readonly HydratedPaste[] = []): HydratedPaste[] {
   return [...points.slice(-2).reverse().map((p) => p.paste), ...extra];
+}
+
+/**
+ * The ettringite stability limit of a Monte Carlo sample, narrowed only as far as its flag needs: the flag compares the
+ * curing temperature with the limit at a few decision temperatures (`decisionTemperaturesC`), so it is enough to know on
+ * which side of each the limit lies. Ettringite is taken as stable below the limit and not above it (one crossing, as
+ * the root finding assumes), so the saturation index of ettringite in the paste without it decides each side: ≥ 0 at
+ * t means the limit lies above t. The index at the curing and service temperatures comes from their states; the other
+ * decision temperatures take one equilibrium each (`siWithoutAt`). The bracket is bounded by decision temperatures, or by
+ * the service temperature below and the range's end above, and none lies inside it.
+ *
+ * Undefined (so that the caller finds the limit by root finding) where this cannot decide soundly: no decision
+ * temperature, one outside the range, an equilibrium that fails, a non-monotonic index, or ettringite unstable at every decision
+ * temperature without being stable at a lower service temperature (the limit could then lie below, or ettringite be
+ * absent throughout: a different answer for the flag).
+ */
+export function decidedStabilityLimit(
+  decisionTemperaturesC: readonly number[],
+  range: { fromC: number; toC: number },
+  atService: TemperatureState,
+  atCuring: TemperatureState | null,
+  siWithoutAt: (temperatureC: number) => number | undefined,
+): StabilityLimit | undefined {
+  const points = [...new Set(decisionTemperaturesC)].sort((a, b) => a - b);
+  if (points.length === 0 || points.some((t) => !(t >= range.fromC && t <= range.toC))) return undefined;
+  const known = new Map<number, number>([[atService.temperatureC, atService.ettringiteSaturationIndexWithoutIt]]);
+  if (atCuring) known.set(atCuring.temperatureC, atCuring.ettringiteSaturationIndexWithoutIt);
+  const stableAt: boolean[] = [];
+  for (const t of points) {
+    const si = known.get(t) ?? siWithoutAt(t);
+    if (si === undefined || Number.isNaN(si)) return undefined;
+    stableAt.push(si >= 0);
+  }
+  // One crossing: stable points first, then unstable ones.
+  const firstUnstable = stableAt.indexOf(false);
+  if (firstUnstable >= 0 && stableAt.slice(firstUnstable).some(Boolean)) return undefined;
+  if (firstUnstable < 0) return { kind: "decided", bracketC: [points[points.length - 1], range.toC] };
+  if (firstUnstable > 0) return { kind: "decided", bracketC: [points[firstUnstable - 1], points[firstUnstable]] };
+  // Unstable at every decision temperature: below them, only a stable service state bounds the limit.
+  const serviceC = atService.temperatureC;
+  if (serviceC < points[0] && atService.ettringiteSaturationIndexWithoutIt >= 0) return { kind: "decided", bracketC: [serviceC, points[0]] };
+  return undefined;
 }
 
 /** The most supersaturated allowed solid of a paste (suppressed phases excluded), or undefined if none exceeds the tolerance. */
@@ -374,6 +427,7 @@ export function stabilityHintC(limit: StabilityLimit): number {
     case "absent-throughout":
       return limit.fromC;
     case "bracketed":
+    case "decided":
       return (limit.bracketC[0] + limit.bracketC[1]) / 2;
   }
 }
@@ -588,11 +642,16 @@ export function temperatureHistory(
   const maxIterations = options.maxIterations ?? DEFAULT_MAX_ITERATIONS;
   const figure = stabilityFigure("temperature", "ettringite");
   const hintC = base.book?.figures.get(figure);
-  const stabilityLimit =
-    reduced && hintC !== undefined
-      ? stabilityLimitNear(withoutEttringite, "ettringite", { fromC, toC }, hintC, tolerance, maxIterations, bookedSlopePerC(base.book, "temperature-without-ettringite", "ettringite", hintC))
+  const rootNearHint = () =>
+    stabilityLimitNear(withoutEttringite, "ettringite", { fromC, toC }, hintC!, tolerance, maxIterations, bookedSlopePerC(base.book, "temperature-without-ettringite", "ettringite", hintC!));
+  // A sample with decision temperatures settles its limit after the service and curing states, which it reuses.
+  const byDecision = reduced && hintC !== undefined && options.decisionTemperaturesC !== undefined;
+  let stabilityLimit: StabilityLimit | undefined = byDecision
+    ? undefined
+    : reduced && hintC !== undefined
+      ? rootNearHint()
       : phaseStabilityLimit(points, "ettringite", withoutEttringite, tolerance, maxIterations);
-  if (base.book?.mode === "record") base.book.figures.set(figure, stabilityHintC(stabilityLimit));
+  if (base.book?.mode === "record" && stabilityLimit) base.book.figures.set(figure, stabilityHintC(stabilityLimit));
 
   const at = (t: number) => points.find((p) => p.dose === t)!.paste;
   const stateAt = (t: number): { ok: true; value: TemperatureState } | { ok: false; error: TemperatureHistoryError } => {
@@ -608,6 +667,13 @@ export function temperatureHistory(
     const s = stateAt(curingC);
     if (!s.ok) return s;
     atCuring = s.value;
+  }
+  if (!stabilityLimit) {
+    const siWithoutAt = (t: number) => {
+      const without = withoutEttringite(t, byDistance(points, t));
+      return without.ok ? (without.value.assemblage.saturationIndices.ettringite ?? Number.NEGATIVE_INFINITY) : undefined;
+    };
+    stabilityLimit = decidedStabilityLimit(options.decisionTemperaturesC ?? [], { fromC, toC }, atService.value, atCuring, siWithoutAt) ?? rootNearHint();
   }
   // mol per 100 g binder × (B kg/m³ × 10 per 100 g) = mol/m³
   const molPerM3 = (per100g: number) => per100g * base.binderContentKgPerM3 * 10;

@@ -116,6 +116,11 @@ export type ThaumasiteOptions = {
   maxIterations?: number;
   /** The reduced path of a Monte Carlo sample read from a `WarmStartBook`: the service state only, and the stability temperature by root finding from the reference run's. */
   reduced?: boolean;
+  /**
+   * On the reduced path: whether a flag's answer depends on the stability temperature. The thaumasite-formation flag's
+   * does not (it reads the service state), so a sample leaves the limit undecided over the range (`kind: "decided"`).
+   */
+  limitNeeded?: boolean;
 };
 
 function add(to: Record<string, number>, elements: Record<string, number>, times: number) {
@@ -242,10 +247,12 @@ export function thaumasite(
   const hintC = base.book?.figures.get(figure);
   const tolerance = options.toleranceC ?? DEFAULT_TOLERANCE_C;
   const maxIterations = options.maxIterations ?? DEFAULT_MAX_ITERATIONS;
-  const stabilityLimit =
-    reduced && hintC !== undefined
-      ? stabilityLimitNear(withoutThaumasite, "thaumasite", { fromC, toC }, hintC, tolerance, maxIterations, bookedSlopePerC(base.book, "thaumasite-without-thaumasite", "thaumasite", hintC))
-      : phaseStabilityLimit(points, "thaumasite", withoutThaumasite, tolerance, maxIterations);
+  const stabilityLimit: StabilityLimit =
+    reduced && options.limitNeeded === false
+      ? { kind: "decided", bracketC: [fromC, toC] }
+      : reduced && hintC !== undefined
+        ? stabilityLimitNear(withoutThaumasite, "thaumasite", { fromC, toC }, hintC, tolerance, maxIterations, bookedSlopePerC(base.book, "thaumasite-without-thaumasite", "thaumasite", hintC))
+        : phaseStabilityLimit(points, "thaumasite", withoutThaumasite, tolerance, maxIterations);
   if (base.book?.mode === "record") base.book.figures.set(figure, stabilityHintC(stabilityLimit));
 
   const service = points.find((p) => p.dose === serviceC)!.paste;

@@ -17,7 +17,7 @@ import { dryingScenario, type DryingScenario } from "../scenarios/drying";
 import { temperatureHistory, type TemperatureHistoryResult } from "../scenarios/temperature-history";
 import { thaumasite, type ThaumasiteResult } from "../scenarios/thaumasite";
 import { chlorideBindingLimitFlag } from "../advisory/flag-rules/chloride-binding-limit";
-import { delayedEttringiteFormationFlag } from "../advisory/flag-rules/delayed-ettringite-formation";
+import { defDecisionTemperaturesC, delayedEttringiteFormationFlag } from "../advisory/flag-rules/delayed-ettringite-formation";
 import { ettringiteDehydrationFlag } from "../advisory/flag-rules/ettringite-dehydration";
 import { thaumasiteFormationFlag } from "../advisory/flag-rules/thaumasite-formation";
 import { sulfateIngress, type SulfateScenario } from "../scenarios/sulfate-ingress";
@@ -186,7 +186,12 @@ export function assessWithDataset(input: AssessInput, binder: BinderSystem, data
   }
   const curingMaxTemperatureC = curing ? Math.max(curing.temperature.peakCoreC, input.curing.maxTemperatureC ?? -Infinity) : input.curing.maxTemperatureC;
   const scenarioContext = { ...context, curingMaxTemperatureC };
-  const temperature = temperatureHistory(base, exposure, { points, curingMaxTemperatureC, reduced: options.reduced });
+  const temperature = temperatureHistory(base, exposure, {
+    points,
+    curingMaxTemperatureC,
+    reduced: options.reduced,
+    decisionTemperaturesC: curingMaxTemperatureC === undefined ? undefined : defDecisionTemperaturesC(curingMaxTemperatureC),
+  });
   if (!temperature.ok) scenarioErrors.temperature = { code: temperature.error.code, message: temperature.error.message };
   else {
     scenarios.temperature = temperature.value;
@@ -194,7 +199,8 @@ export function assessWithDataset(input: AssessInput, binder: BinderSystem, data
     if (def) flags.push(def);
   }
 
-  const thaumasiteResult = thaumasite(base, exposure, { points: Math.max(5, Math.round(points / 2)), reduced: options.reduced });
+  // The thaumasite-formation flag reads the service state, not the stability temperature (a sample need not find it).
+  const thaumasiteResult = thaumasite(base, exposure, { points: Math.max(5, Math.round(points / 2)), reduced: options.reduced, limitNeeded: false });
   if (!thaumasiteResult.ok) scenarioErrors.thaumasite = { code: thaumasiteResult.error.code, message: thaumasiteResult.error.message };
   else {
     scenarios.thaumasite = thaumasiteResult.value;

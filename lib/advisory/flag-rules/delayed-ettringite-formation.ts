@@ -11,6 +11,15 @@ const f1 = (x: number) => x.toFixed(1);
 const f2 = (x: number) => x.toFixed(2);
 
 /**
+ * The temperatures at which this flag's answer changes with the ettringite stability temperature T_s: the warning
+ * compares the curing temperature with T_s, the caution with T_s − the caution margin. Knowing on which side of each
+ * the limit lies decides the flag (`decidedStabilityLimit`).
+ */
+export function defDecisionTemperaturesC(curingMaxTemperatureC: number): number[] {
+  return [curingMaxTemperatureC, curingMaxTemperatureC + CAUTION_MARGIN_C];
+}
+
+/**
  * `delayed-ettringite-formation`: the concrete was hotter during curing than ettringite tolerates, so its sulfate
  * went into AFm and the pore solution and can form ettringite later in the hardened paste, with expansion in moist
  * service (Taylor, Famy & Scrivener 2001, Cem. Concr. Res. 31, 683).
@@ -28,7 +37,9 @@ export function delayedEttringiteFormationFlag(
   const curingC = context.curingMaxTemperatureC ?? s.curingTemperatureC ?? undefined;
   if (curingC === undefined) return undefined;
   // A limit only bracketed by the sweep (root finding failed) is taken at the lower end of its bracket (conservative).
-  const stabilityC = s.ettringiteStabilityTemperatureC ?? (s.stabilityLimit.kind === "bracketed" ? s.stabilityLimit.bracketC[0] : null);
+  // A bracketed or decided limit counts at its lower end: the conservative reading, and for a decided limit (a Monte Carlo
+  // sample, `defDecisionTemperaturesC`) the same answer as any value in the bracket.
+  const stabilityC = s.ettringiteStabilityTemperatureC ?? (s.stabilityLimit.kind === "bracketed" || s.stabilityLimit.kind === "decided" ? s.stabilityLimit.bracketC[0] : null);
   const governingC = stabilityC === null ? SPECIFICATION_LIMIT_C : Math.min(stabilityC, SPECIFICATION_LIMIT_C);
   let severity: Severity;
   if (curingC > governingC) severity = "warning";
@@ -42,6 +53,8 @@ export function delayedEttringiteFormationFlag(
         ? `In this mix the engine finds ettringite stable over the whole range computed (up to ${f1(s.stabilityLimit.upToC)} °C).`
         : s.stabilityLimit.kind === "bracketed"
           ? `In this mix the engine finds ettringite stable up to between ${f1(s.stabilityLimit.bracketC[0])} and ${f1(s.stabilityLimit.bracketC[1])} °C (the root finding did not converge).`
+          : s.stabilityLimit.kind === "decided"
+            ? `In this mix the engine finds ettringite stable up to between ${f1(s.stabilityLimit.bracketC[0])} and ${f1(s.stabilityLimit.bracketC[1])} °C (narrowed as far as this flag needs).`
           : "In this mix the engine finds no ettringite at any temperature computed.";
   const dataCaveat =
     "The thermodynamic data used are known to make ettringite too stable at high temperature (about 1.3 log10 units at 85 °C), so the computed stability temperature is likely too high; " +

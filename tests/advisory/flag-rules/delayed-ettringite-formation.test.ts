@@ -1,8 +1,8 @@
 import { describe, it, expect } from "vitest";
 import { binderSystemFromInput } from "../../../lib/cement/binder-system";
-import { delayedEttringiteFormationFlag } from "../../../lib/advisory/flag-rules/delayed-ettringite-formation";
+import { defDecisionTemperaturesC, delayedEttringiteFormationFlag } from "../../../lib/advisory/flag-rules/delayed-ettringite-formation";
 import { parseExposureInput } from "../../../lib/schema/exposure-input";
-import { temperatureHistory } from "../../../lib/scenarios/temperature-history";
+import { decidedStabilityLimit, temperatureHistory, type StabilityLimit } from "../../../lib/scenarios/temperature-history";
 import type { ScenarioBase } from "../../../lib/scenarios/sweep";
 
 /** Typical CEM I paste (scenario brief): w/b 0.5, 350 kg/m³, 28 days at 20 °C. */
@@ -71,5 +71,42 @@ describe("the delayed-ettringite-formation flag (issue 5 acceptance)", () => {
     const result = temperatureHistory(base, exposure, { points: 4 });
     if (!result.ok) throw new Error(JSON.stringify(result.error));
     expect(delayedEttringiteFormationFlag(result.value, { exposure, waterBinderRatio: 0.5 })).toBeUndefined();
+  });
+});
+
+describe("the flag from a Monte Carlo sample's decided limit", () => {
+  // Property of the method, not a reference value: for a true stability temperature T_s and a curing temperature, the
+  // bracket that decidedStabilityLimit narrows to (ettringite taken stable below T_s, index T_s − t) must give the same
+  // flag as T_s found by root finding. The states are those of a real run, with their indices replaced.
+  const real = resultFor(60);
+  const withLimit = (limit: StabilityLimit, curingC: number, siAt: (t: number) => number) => {
+    const s = real.summary;
+    const atService = { ...s.atService, ettringiteSaturationIndexWithoutIt: siAt(s.atService.temperatureC) };
+    const atCuring = { ...s.atCuring!, temperatureC: curingC, ettringiteSaturationIndexWithoutIt: siAt(curingC) };
+    return { ...real, summary: { ...s, curingTemperatureC: curingC, atService, atCuring, stabilityLimit: limit, ettringiteStabilityTemperatureC: limit.kind === "found" ? limit.temperatureC : null } };
+  };
+  const severity = (result: typeof real, curingC: number) => delayedEttringiteFormationFlag(result, { exposure, curingMaxTemperatureC: curingC, waterBinderRatio: 0.5 })?.severity ?? "none";
+
+  it("is the flag of the root itself, for limits and curing temperatures on a grid", () => {
+    let compared = 0;
+    for (let stabilityC = 30.25; stabilityC <= 94; stabilityC += 2.5) {
+      for (let curingC = 25; curingC <= 89; curingC += 1.5) {
+        const siAt = (t: number) => stabilityC - t;
+        const decided = decidedStabilityLimit(defDecisionTemperaturesC(curingC), { fromC: 5, toC: 95 }, withLimit({ kind: "stable-throughout", upToC: 95 }, curingC, siAt).summary.atService, withLimit({ kind: "stable-throughout", upToC: 95 }, curingC, siAt).summary.atCuring, siAt);
+        expect(decided?.kind, `T_s ${stabilityC}, curing ${curingC}`).toBe("decided");
+        const found: StabilityLimit = { kind: "found", temperatureC: stabilityC, iterations: 1, bracketC: [stabilityC - 0.1, stabilityC + 0.1] };
+        expect(severity(withLimit(decided!, curingC, siAt), curingC), `T_s ${stabilityC}, curing ${curingC}`).toBe(severity(withLimit(found, curingC, siAt), curingC));
+        compared++;
+      }
+    }
+    expect(compared).toBeGreaterThan(500);
+  });
+
+  it("is left to root finding where the sides cannot be told: unstable at every decision temperature and at the service temperature", () => {
+    const siAt = () => -1;
+    const states = withLimit({ kind: "absent-throughout", fromC: 5, toC: 95 }, 60, siAt).summary;
+    expect(decidedStabilityLimit(defDecisionTemperaturesC(60), { fromC: 5, toC: 95 }, states.atService, states.atCuring, siAt)).toBeUndefined();
+    // A decision temperature outside the range, too.
+    expect(decidedStabilityLimit(defDecisionTemperaturesC(93), { fromC: 5, toC: 95 }, states.atService, states.atCuring, siAt)).toBeUndefined();
   });
 });

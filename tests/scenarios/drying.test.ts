@@ -5,6 +5,7 @@ import { GAS_CONSTANT_J_PER_MOL_K } from "../../lib/equilibrium/problem";
 import { dryingScenario, familyTransitionRhPercent, hydrationStateMaps, type DryingScenario } from "../../lib/scenarios/drying";
 import { newWarmStartBook, readingBook } from "../../lib/scenarios/sweep";
 import { exposureInput } from "../../lib/schema/exposure-input";
+import { expectReference } from "../support/reference-check";
 
 /**
  * The drying scenario on a typical CEM I paste (preset labelled "typical"; w/b 0.5, 350 kg/m³, 28 days at 20 °C).
@@ -46,6 +47,27 @@ describe("transition humidities at 25 °C reproduce the data set's recalled tran
 });
 
 describe("checks not built into the data", () => {
+  it("puts the gypsum → anhydrite transition at 25 °C at the water activity measured by Hardie (1967, Am. Mineral. 52, 171: a_w = 0.78 at 25 °C, from brine equilibrations; from memory), within 3 RH points", () => {
+    // Independent of the data: gypsum and anhydrite are entered from their pure-water solubility products (Nordstrom et al.
+    // 1990, ACS Symp. Ser. 416, 398), which fix log a_w = (log Ksp,gypsum − log Ksp,anhydrite)/2 = −0.11 through the
+    // engine; Hardie measured the transition in NaCl brines. Bassanite is never the stable member on this path.
+    const published = hydrationFamilies().find((f) => f.family === "calcium-sulfate")!.transitions.find((t) => t.temperatureC === 25)!;
+    expect(published.usedToDeriveData).toBe(false);
+    expect(published.relativeHumidityPercent).toBe(78);
+    const rh = transition("calcium-sulfate", "anhydrite", 25)!;
+    expectReference({
+      id: "gypsum-anhydrite-transition-rh-25C",
+      quantity: "relative humidity of the gypsum → anhydrite transition",
+      conditions: "calcium sulfate family alone at fixed water-vapour pressure, 25 °C, 1 bar",
+      source: "Hardie (1967) Am. Mineral. 52, 171 (water activity 0.78; from memory)",
+      reference: published.relativeHumidityPercent,
+      computed: rh,
+      tolerance: 3,
+      unit: "% RH",
+    });
+    expect(transition("calcium-sulfate", "bassanite", 25)).toBeCloseTo(rh, 6);
+  });
+
   it("puts the gypsum → anhydrite transition near water saturation between about 40 and 60 °C, as in water (Bock 1961, Can. J. Chem. 39, 1746: 42 °C; Hardie 1967, Am. Mineral. 52: experiments up to 58 ± 2 °C)", () => {
     // below the transition temperature gypsum holds to high humidity; above it anhydrite is stable even at 99.5 % RH
     expect(transition("calcium-sulfate", "bassanite", 38)).not.toBeNull();

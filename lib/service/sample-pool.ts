@@ -26,7 +26,7 @@ export function defaultSampleWorkers(): number {
 }
 
 /**
- * Samples per range: enough that a range outweighs its message round trip (a sample takes about 50–90 ms), few enough
+ * Samples per range: enough that a range outweighs its message round trip (a sample takes some tens of ms), few enough
  * that ranges share the threads evenly and progress moves.
  */
 export const SAMPLES_PER_RANGE = 10;

@@ -36,8 +36,7 @@ export function delayedEttringiteFormationFlag(
   const s = result.summary;
   const curingC = context.curingMaxTemperatureC ?? s.curingTemperatureC ?? undefined;
   if (curingC === undefined) return undefined;
-  // A limit only bracketed by the sweep (root finding failed) is taken at the lower end of its bracket (conservative).
-  // A bracketed or decided limit counts at its lower end: the conservative reading, and for a decided limit (a Monte Carlo
+  // A bracketed (root finding failed) or decided limit counts at its lower end: the conservative reading, and for a decided limit (a Monte Carlo
   // sample, `defDecisionTemperaturesC`) the same answer as any value in the bracket.
   const stabilityC = s.ettringiteStabilityTemperatureC ?? (s.stabilityLimit.kind === "bracketed" || s.stabilityLimit.kind === "decided" ? s.stabilityLimit.bracketC[0] : null);
   const governingC = stabilityC === null ? SPECIFICATION_LIMIT_C : Math.min(stabilityC, SPECIFICATION_LIMIT_C);

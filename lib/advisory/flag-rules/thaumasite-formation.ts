@@ -53,7 +53,7 @@ export function thaumasiteFormationFlag(
       ? `With this exposure the engine finds thaumasite stable up to ${f1(s.stabilityLimit.temperatureC)} °C.`
       : s.stabilityLimit.kind === "stable-throughout"
         ? `With this exposure the engine finds thaumasite stable over the whole range computed (up to ${f1(s.stabilityLimit.upToC)} °C); field experience puts most attack below about ${COLD_SERVICE_TEMPERATURE_C} °C, where it is fastest.`
-        : s.stabilityLimit.kind === "bracketed" || s.stabilityLimit.kind === "decided"
+        : s.stabilityLimit.kind === "bracketed"
           ? `With this exposure the engine finds thaumasite stable up to between ${f1(s.stabilityLimit.bracketC[0])} and ${f1(s.stabilityLimit.bracketC[1])} °C.`
           : "";
   const explanation = [

@@ -53,7 +53,7 @@ export function AssessmentForm({ onSubmit, initialValues, busy = false, submitLa
     reValidateMode: "onChange",
     shouldFocusError: false,
   });
-  const { handleSubmit, control, reset, formState } = methods;
+  const { handleSubmit, reset, formState } = methods;
   const [thermal, setThermal] = useState(Boolean(initialValues?.curing?.thermal));
   const [steam, setSteam] = useState(Boolean(initialValues?.curing?.thermal?.steamCuring));
   const [evaporation, setEvaporation] = useState(Boolean(initialValues?.curing?.thermal?.evaporation));

@@ -4,7 +4,7 @@ import path from "node:path";
 import { molarMassGPerMol } from "../chem/atomic-weights";
 import { parseFormula } from "../chem/formula";
 import { dataDirectory } from "./data-directory";
-import type { Dataset, DatasetError, DatasetFileInfo, DatasetResult, LoadedSpecies } from "./dataset";
+import type { DatasetError, DatasetFileInfo, DatasetResult, LoadedSpecies } from "./dataset";
 import { dataFile, type DataFile, type SolutionEntry } from "./schema";
 
 export type { Dataset, DatasetError, DatasetResult, LoadedSpecies } from "./dataset";

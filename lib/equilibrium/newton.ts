@@ -32,7 +32,6 @@ export function cloneState(s: SolverState): SolverState {
   return { lambda: s.lambda.slice(), amount: s.amount.slice(), active: s.active.slice(), lnIonicStrength: s.lnIonicStrength };
 }
 
-const LN10 = Math.log(10);
 const MAX_EXPONENT = 600;
 const safeExp = (x: number) => Math.exp(x > MAX_EXPONENT ? MAX_EXPONENT : x);
 

@@ -81,7 +81,6 @@ const isHydron = (s: SpeciesAtTemperature) =>
  * into μ°/RT. A fixed water-vapour pressure removes the liquid phase: the system is then solid–gas.
  */
 export function buildProblem(input: ProblemInput): EquilibriumOutcome<EquilibriumProblem> {
-  const rt = GAS_CONSTANT_J_PER_MOL_K * input.temperatureK;
   const fixed = input.fixedPartialPressuresBar ?? {};
   // The id index is needed only for fixed-pressure gases (most calls have none).
   const byId = Object.keys(fixed).length > 0 ? new Map(input.species.map((s) => [s.id, s])) : new Map<string, SpeciesAtTemperature>();

@@ -1,4 +1,4 @@
-import { describe, it, expect } from "vitest";
+import { describe, it } from "vitest";
 import fc from "fast-check";
 import { solveTridiagonal } from "../../lib/curing/tridiagonal";
 

@@ -333,9 +333,9 @@ function exchangeForAddition(
     if (!outcome.converged) return undefined;
     const negative = mostNegative(p, trial);
     if (negative < 0) return trial;
-    // The new phase may displace two present ones (Fe-AFm next to Fe-AFt and Fe-hydrogarnet): the one driven negative
-    // leaves as well, once.
-    if (negative === k) return undefined;
+    // The new phase may displace two present ones (Fe-AFm next to Fe-AFt and Fe-hydrogarnet): the solid driven negative
+    // leaves as well, once (never the new phase or the solution).
+    if (negative === k || p.phases[negative].kind === "aqueous") return undefined;
     trial.active[negative] = 0;
     trial.amount[negative] = 0;
     const second = solveFixedPhases(p, trial, trialOptions);

@@ -10,6 +10,7 @@ import { assessSample, samplePathReference, summariseSamples, type SampleValue }
 import { domainError, validationError, type ServiceOutcome } from "./outcome";
 import { computeSamples, samplePool, SAMPLES_PER_RANGE } from "./sample-pool";
 import type { WarmStartBook } from "../scenarios/sweep";
+import type { BinderSystem } from "../cement/binder-system";
 
 export type { AssessmentResult, AssessmentScenarios } from "./assessment-core";
 
@@ -55,7 +56,7 @@ export async function runAssessment(raw: unknown, options: AssessmentOptions = {
   options.onProgress?.(input.options.monteCarlo ? 0.05 : 1);
   if (input.options.monteCarlo) {
     const { samples, seed } = input.options.monteCarlo;
-    const values = await monteCarloSamples(input, loaded.value, samples, seed, options);
+    const values = await monteCarloSamples(input, binder.value, loaded.value, samples, seed, options);
     if (!values.ok) return values;
     const summary = summariseSamples(result.flags, values.value);
     result.uncertainty = { samples, seed, failedSamples: summary.failedSamples, phaseVolumesCm3: summary.phaseVolumesCm3 };
@@ -69,14 +70,19 @@ export async function runAssessment(raw: unknown, options: AssessmentOptions = {
  * (`sample-pool.ts`) when there are at least two ranges of samples. Either way the values are the same
  * (`assessment-samples.ts`).
  */
-async function monteCarloSamples(input: AssessInput, dataset: Dataset, samples: number, seed: number, options: AssessmentOptions): Promise<ServiceOutcome<SampleValue[]>> {
-  const binder = binderSystemOf(input);
-  if (!binder.ok) return binder;
+async function monteCarloSamples(
+  input: AssessInput,
+  binder: BinderSystem,
+  dataset: Dataset,
+  samples: number,
+  seed: number,
+  options: AssessmentOptions,
+): Promise<ServiceOutcome<SampleValue[]>> {
   // This thread's reference path, computed when it takes its first sample (the workers compute their own).
   let reference: { book: WarmStartBook | undefined } | undefined;
   const sampleHere = (index: number) => {
-    reference ??= { book: samplePathReference(input, binder.value, dataset) };
-    return assessSample(input, binder.value, dataset, reference.book, seed, index);
+    reference ??= { book: samplePathReference(input, binder, dataset) };
+    return assessSample(input, binder, dataset, reference.book, seed, index);
   };
   const useWorkers = options.sampleWorkers !== 0 && samples >= 2 * SAMPLES_PER_RANGE;
   return computeSamples(samples, {

@@ -92,7 +92,8 @@ describe("the flag from a Monte Carlo sample's decided limit", () => {
     for (let stabilityC = 30.25; stabilityC <= 94; stabilityC += 2.5) {
       for (let curingC = 25; curingC <= 89; curingC += 1.5) {
         const siAt = (t: number) => stabilityC - t;
-        const decided = decidedStabilityLimit(defDecisionTemperaturesC(curingC), { fromC: 5, toC: 95 }, withLimit({ kind: "stable-throughout", upToC: 95 }, curingC, siAt).summary.atService, withLimit({ kind: "stable-throughout", upToC: 95 }, curingC, siAt).summary.atCuring, siAt);
+        const states = withLimit({ kind: "stable-throughout", upToC: 95 }, curingC, siAt).summary;
+        const decided = decidedStabilityLimit(defDecisionTemperaturesC(curingC), { fromC: 5, toC: 95 }, states.atService, states.atCuring, siAt);
         expect(decided?.kind, `T_s ${stabilityC}, curing ${curingC}`).toBe("decided");
         const found: StabilityLimit = { kind: "found", temperatureC: stabilityC, iterations: 1, bracketC: [stabilityC - 0.1, stabilityC + 0.1] };
         expect(severity(withLimit(decided!, curingC, siAt), curingC), `T_s ${stabilityC}, curing ${curingC}`).toBe(severity(withLimit(found, curingC, siAt), curingC));

@@ -7,6 +7,12 @@ import { processWide } from "./process-wide";
 export const ASSESS_WORKERS_ENV = "HYDRASTATE_ASSESS_WORKERS";
 /** Default pool workers: one, leaving the second core of the 2-core service machines to the job workers and the server. */
 export const DEFAULT_ASSESS_WORKERS = 1;
+/**
+ * Assessments that may wait for a pool worker: a short queue bounds the wait (a deterministic assessment takes about
+ * 0.3 s, one with 200 Monte Carlo samples about 6 s: `npm run bench`); one more is answered 503 at once instead of
+ * waiting out the route's time limit (common practice for an overloaded service).
+ */
+export const MAX_QUEUED_ASSESSMENTS = 8;
 
 /** The pool size from the environment's text: unset or empty gives the default; anything but an integer in the limits is an error. */
 export function assessWorkersFrom(text: string | undefined): { ok: true; value: number } | { ok: false; error: PoolSizeError<typeof ASSESS_WORKERS_ENV> } {
@@ -21,7 +27,7 @@ export function assessWorkersFrom(text: string | undefined): { ok: true; value: 
 const pool = processWide("hydrastate.assessmentPool", () => {
   const size = assessWorkersFrom(process.env[ASSESS_WORKERS_ENV]);
   if (!size.ok) console.error(JSON.stringify({ level: "warn", ...size.error, using: DEFAULT_ASSESS_WORKERS }));
-  return createComputationPool<AssessmentResult>(assessmentWorkerModule, { size: size.ok ? size.value : DEFAULT_ASSESS_WORKERS });
+  return createComputationPool<AssessmentResult>(assessmentWorkerModule, { size: size.ok ? size.value : DEFAULT_ASSESS_WORKERS, maxQueued: MAX_QUEUED_ASSESSMENTS });
 });
 
 export function assessmentPool(): ComputationPool<AssessmentResult> {

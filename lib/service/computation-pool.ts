@@ -14,6 +14,8 @@ import { missingFileMessage, resolveWorkerFiles, startWorkerThread, WorkerJobErr
  * - A worker that crashes rejects only its current request, with a `WorkerJobError` (the caller reports it as
  *   internal, without stack), and is replaced for the next one.
  * - Idle workers are unref'd, so an idle pool keeps no process alive.
+ * - At most `maxQueued` requests wait: one more is answered at once with the typed `busy` error (503 on the routes),
+ *   rather than waiting out its time limit behind the others.
  */
 export type PoolRunOptions = { signal?: AbortSignal; onProgress?: (fraction: number) => void };
 
@@ -36,6 +38,8 @@ export type ComputationPool<T> = {
 export type ComputationPoolOptions = {
   /** Worker threads at most (default 1). */
   size?: number;
+  /** Requests that may wait for a worker (default: no bound). */
+  maxQueued?: number;
 };
 
 /** Pool sizes accepted: a bound against typing errors, not a tuning (common practice). */
@@ -77,11 +81,14 @@ type Slot<T> = { worker: Worker; state: "idle" | "busy" | "stopping"; request: R
 
 const cancelledQueued = () => domainError("cancelled", "the computation was cancelled before it started");
 const cancelledRunning = () => domainError("cancelled", "the computation's worker was stopped");
+const queueFull = (maxQueued: number) => domainError("busy", `the service is busy: ${maxQueued} computations are already waiting; try again shortly`, { maxQueued });
 
 export function createComputationPool<T>(module: WorkerModule, options: ComputationPoolOptions = {}): ComputationPool<T> {
   const size = options.size ?? 1;
   if (!Number.isInteger(size) || size < POOL_SIZE_LIMITS.min || size > POOL_SIZE_LIMITS.max)
     throw new RangeError(`pool size must be an integer from ${POOL_SIZE_LIMITS.min} to ${POOL_SIZE_LIMITS.max}, got ${size}`);
+  const maxQueued = options.maxQueued ?? Number.POSITIVE_INFINITY;
+  if (!(maxQueued >= 0)) throw new RangeError(`maxQueued must be 0 or more, got ${maxQueued}`);
   const queue: Request<T>[] = [];
   const slots = new Set<Slot<T>>();
   let nextId = 1;
@@ -172,6 +179,8 @@ export function createComputationPool<T>(module: WorkerModule, options: Computat
       return new Promise<ServiceOutcome<T>>((resolve, reject) => {
         const { signal } = runOptions;
         if (signal?.aborted) return resolve(cancelledQueued());
+        const mustWait = queue.length > 0 || (slots.size >= size && ![...slots].some((s) => s.state === "idle"));
+        if (mustWait && queue.length >= maxQueued) return resolve(queueFull(maxQueued));
         const request: Request<T> = {
           id: nextId++,
           raw,

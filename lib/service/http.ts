@@ -9,12 +9,14 @@ import type { ServiceError, ServiceOutcome } from "./outcome";
  * - body that is not JSON → 400 `{ error: "invalid_json" }`;
  * - validation errors → 422 `{ error: "validation", issues: [{ path, message }] }`;
  * - domain errors → the status of their code (`domainStatus`), body `{ error: code, message, detail? }`;
- * - a computation over its time limit → 504 `{ error: "time_limit", limitMs }`; a full job queue → 503;
+ * - a computation over its time limit → 504 `{ error: "time_limit", limitMs }`; a full job or computation queue → 503 with Retry-After;
  * - anything else → 500 `{ error: "internal", message, requestId }` and ONE log line, never a stack trace.
  */
 
 /** Default request-body limit, bytes (256 kB; common practice for JSON APIs of this size of input). */
 export const DEFAULT_BODY_LIMIT_BYTES = 256 * 1024;
+/** Retry-After of a busy (503) answer, s: about one full assessment with Monte Carlo samples (common practice: a few seconds). */
+export const BUSY_RETRY_AFTER_S = 5;
 /** Default time limit of one computation on the request path, ms. */
 export const DEFAULT_TIME_LIMIT_MS = 30_000;
 
@@ -63,7 +65,8 @@ export function errorResponse(error: ServiceError): Response {
   if (error.kind === "validation") return jsonResponse(422, { error: "validation", issues: error.issues });
   const body: Record<string, unknown> = { error: error.code, message: error.message };
   if (error.detail !== undefined) body.detail = error.detail;
-  return jsonResponse(domainStatus(error.code), body);
+  const status = domainStatus(error.code);
+  return jsonResponse(status, body, status === 503 ? { "retry-after": String(BUSY_RETRY_AFTER_S) } : {});
 }
 
 /** 200 (or `status`) with the value, or the error response. */

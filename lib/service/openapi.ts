@@ -45,7 +45,7 @@ const commonErrors = {
   "500": errorResponse("unexpected failure (body carries a request id; never a stack trace)"),
 };
 
-function computation(summary: string, schemaName: string) {
+function computation(summary: string, schemaName: string, queued = false) {
   return {
     post: {
       summary,
@@ -55,6 +55,7 @@ function computation(summary: string, schemaName: string) {
         ...commonErrors,
         "409": errorResponse("the computation did not converge"),
         "504": errorResponse("time limit exceeded"),
+        ...(queued ? { "503": errorResponse("too many assessments waiting (Retry-After header)") } : {}),
       },
     },
   };
@@ -79,7 +80,7 @@ export function openApiDocument(): Record<string, unknown> {
       "/equilibrate": computation("equilibrium phase assemblage of one system", "EquilibrateInput"),
       "/cure": computation("curing advisory: element temperature, maturity, strength, curing period, flags", "CuringInput"),
       "/hydrate": computation("hydrate assemblage of a binder at an age", "HydrateInput"),
-      "/assess": computation("full assessment: assemblage, scenarios, exposure classes, flags, cautions", "AssessInput"),
+      "/assess": computation("full assessment: assemblage, scenarios, exposure classes, flags, cautions", "AssessInput", true),
       "/assess/jobs": {
         post: {
           summary: "start an assessment as a background job (long Monte Carlo runs)",

@@ -21,8 +21,8 @@ function assessmentPool(): ComputationPool<AssessmentResult> {
 }
 
 /** A pool of the fixture's `act`, with its requests typed. */
-function fixturePool(size = 1) {
-  const created = createComputationPool<FixtureResult>({ modulePath: "tests/service/computation-pool-fixture.ts", exportName: "act" }, { size });
+function fixturePool(size = 1, maxQueued?: number) {
+  const created = createComputationPool<FixtureResult>({ modulePath: "tests/service/computation-pool-fixture.ts", exportName: "act" }, { size, maxQueued });
   pools.push(created as ComputationPool<unknown>);
   return { pool: created, run: (request: FixtureRequest, options?: PoolRunOptions) => created.run(request, options) };
 }
@@ -97,6 +97,22 @@ describe("the computation pool", () => {
     expect(pool.stats().workers).toBe(2);
     const first = valueOf(await run({ action: "busy", tag: "first", ms: 1 }));
     expect(first.ran).toEqual(["warm-up", "first"]);
+  });
+
+  it("answers a request beyond maxQueued waiting ones at once as busy, and takes requests again once the queue drains", async () => {
+    const { pool, run } = fixturePool(1, 1);
+    const first = run({ action: "busy", tag: "first", ms: 300 });
+    const waiting = run({ action: "busy", tag: "waiting", ms: 10 });
+    const started = performance.now();
+    const refused = await run({ action: "busy", tag: "refused", ms: 10 });
+    expect(performance.now() - started).toBeLessThan(100); // answered without waiting for the worker (300 ms busy)
+    expect(refused).toMatchObject({ ok: false, error: { kind: "domain", code: "busy", detail: { maxQueued: 1 } } });
+    expect(pool.stats()).toMatchObject({ busy: 1, queued: 1 });
+    expect(valueOf(await first).tag).toBe("first");
+    const ranSoFar = valueOf(await waiting).ran;
+    expect(ranSoFar).toEqual(["first", "waiting"]);
+    // With the worker idle and nothing queued, a request is taken even though maxQueued is 1.
+    expect(valueOf(await run({ action: "busy", tag: "later", ms: 10 })).ran).toEqual(["first", "waiting", "later"]);
   });
 
   it("never runs a request cancelled while it waits in the queue", async () => {

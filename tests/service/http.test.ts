@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { domainError, validationError } from "../../lib/service/outcome";
-import { domainStatus, errorResponse, guarded, jsonComputation, readJsonBody, withTimeLimit } from "../../lib/service/http";
+import { BUSY_RETRY_AFTER_S, domainStatus, errorResponse, guarded, jsonComputation, readJsonBody, withTimeLimit } from "../../lib/service/http";
 
 const ctx = { params: Promise.resolve({}) };
 const post = (body: BodyInit | null, headers: Record<string, string> = {}) => new Request("http://localhost/api/v1/x", { method: "POST", body, headers, duplex: "half" } as RequestInit);
@@ -50,6 +50,13 @@ describe("status mapping", () => {
 
   it("gives domain codes their own status", () => {
     expect([domainStatus("not_found"), domainStatus("no_convergence"), domainStatus("cancelled"), domainStatus("infeasible_composition"), domainStatus("time_limit"), domainStatus("busy")]).toEqual([404, 409, 409, 422, 504, 503]);
+  });
+
+  it("sends busy as 503 with a Retry-After header (RFC 9110 §10.2.3), and no Retry-After on other errors", async () => {
+    const busy = errorResponse(domainError("busy", "the service is busy", { maxQueued: 8 }).error);
+    expect(busy.status).toBe(503);
+    expect(busy.headers.get("retry-after")).toBe(String(BUSY_RETRY_AFTER_S));
+    expect(errorResponse(domainError("no_convergence", "x").error).headers.get("retry-after")).toBeNull();
   });
 
   it("keeps a domain error's code, message and detail in the body", async () => {

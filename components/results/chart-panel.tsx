@@ -26,7 +26,11 @@ import { DataTable } from "./data-table";
 const PALETTE = ["#0072B2", "#E69F00", "#009E73", "#CC79A7", "#56B4E9", "#D55E00", "#F0E442", "#000000", "#999999"];
 const DASHES = ["", "6 3", "2 2", "8 3 2 3"];
 
-const colourOf = (index: number) => PALETTE[index % PALETTE.length];
+/** A series' own colour (phase colours, `lib/charts/phase-colours.ts`), else one by position. */
+const colourOf = (chart: ChartData, index: number) => chart.series[index].colour ?? PALETTE[index % PALETTE.length];
+
+/** The series that are drawn (table-only ones are in the data table and the CSV alone), with their index in `series`. */
+const drawn = (chart: ChartData) => chart.series.map((s, index) => ({ s, i: index })).filter(({ s }) => !s.tableOnly);
 
 function downloadCsv(chart: ChartData) {
   const blob = new Blob([chartCsv(chart)], { type: "text/csv;charset=utf-8" });
@@ -58,7 +62,8 @@ function Axes({ chart }: { chart: ChartData }) {
         <YAxis yAxisId="right" orientation="right" domain={["auto", "auto"]} label={{ value: axisCaption(chart.yRight.label, chart.yRight.unit), angle: 90, position: "insideRight", style: { textAnchor: "middle" } }} />
       ) : null}
       <Tooltip />
-      <Legend verticalAlign="top" />
+      {/* Legend text in the page's text colour: light phase colours (empty pores, amorphous silica) would be unreadable as text. */}
+      <Legend verticalAlign="top" formatter={(value) => <span className="chart-legend-label">{value}</span>} />
       {chart.thresholds.map((t) => (
         <ReferenceLine key={t.label} yAxisId={t.axis} y={t.value} ifOverflow="extendDomain" stroke="#B00020" strokeDasharray="6 4" label={{ value: t.label, position: "insideTopLeft" }} />
       ))}
@@ -73,8 +78,8 @@ function Drawing({ chart }: { chart: ChartData }) {
       return (
         <BarChart data={chart.rows} margin={margin}>
           {Axes({ chart })}
-          {chart.series.map((s, i) => (
-            <Bar key={s.key} dataKey={s.key} name={s.label} stackId="stack" yAxisId={s.axis} fill={colourOf(i)} isAnimationActive={false} />
+          {drawn(chart).map(({ s, i }) => (
+            <Bar key={s.key} dataKey={s.key} name={s.label} stackId="stack" yAxisId={s.axis} fill={colourOf(chart, i)} stroke="#9a9a9a" strokeWidth={0.5} isAnimationActive={false} />
           ))}
         </BarChart>
       );
@@ -82,9 +87,9 @@ function Drawing({ chart }: { chart: ChartData }) {
       return (
         <AreaChart data={chart.rows} margin={margin}>
           {Axes({ chart })}
-          {chart.series.map((s, i) =>
+          {drawn(chart).map(({ s, i }) =>
             s.axis === "left" ? (
-              <Area key={s.key} dataKey={s.key} name={s.label} stackId="stack" yAxisId="left" type="monotone" stroke={colourOf(i)} fill={colourOf(i)} fillOpacity={0.6} isAnimationActive={false} />
+              <Area key={s.key} dataKey={s.key} name={s.label} stackId="stack" yAxisId="left" type="monotone" stroke={colourOf(chart, i)} fill={colourOf(chart, i)} fillOpacity={0.85} isAnimationActive={false} />
             ) : (
               <Area key={s.key} dataKey={s.key} name={s.label} yAxisId="right" type="monotone" stroke="#000" strokeWidth={2} strokeDasharray="5 3" fill="none" isAnimationActive={false} connectNulls={false} />
             ),
@@ -95,14 +100,14 @@ function Drawing({ chart }: { chart: ChartData }) {
       return (
         <ScatterChart margin={margin}>
           {Axes({ chart })}
-          {chart.series.map((s, i) => (
+          {drawn(chart).map(({ s, i }) => (
             <Scatter
               key={s.key}
               name={s.label}
               yAxisId="left"
               data={chart.rows.filter((r) => r[s.key] !== null).map((r) => ({ [chart.x.key]: r[chart.x.key], [s.key]: r[s.key] }))}
               dataKey={s.key}
-              fill={colourOf(i)}
+              fill={colourOf(chart, i)}
               shape={(["circle", "square", "triangle", "diamond", "cross", "star", "wye"] as const)[i % 7]}
               isAnimationActive={false}
             />
@@ -113,8 +118,8 @@ function Drawing({ chart }: { chart: ChartData }) {
       return (
         <LineChart data={chart.rows} margin={margin}>
           {Axes({ chart })}
-          {chart.series.map((s, i) => (
-            <Line key={s.key} dataKey={s.key} name={s.label} yAxisId={s.axis} type="monotone" stroke={colourOf(i)} strokeDasharray={DASHES[i % DASHES.length]} dot={false} strokeWidth={2} isAnimationActive={false} connectNulls={false} />
+          {drawn(chart).map(({ s, i }) => (
+            <Line key={s.key} dataKey={s.key} name={s.label} yAxisId={s.axis} type="monotone" stroke={colourOf(chart, i)} strokeDasharray={DASHES[i % DASHES.length]} dot={false} strokeWidth={2} isAnimationActive={false} connectNulls={false} />
           ))}
         </LineChart>
       );
@@ -136,7 +141,7 @@ export function ChartPanel({ chart, height = 320 }: { chart: ChartData; height?:
         ) : null}
       </figcaption>
       <p className="visually-hidden">
-        {`${chart.title}: ${chart.series.map((s) => s.label).join(", ")} against ${axisCaption(chart.x.label, chart.x.unit)}. The data table gives the values.`}
+        {`${chart.title}: ${drawn(chart).map(({ s }) => s.label).join(", ")} against ${axisCaption(chart.x.label, chart.x.unit)}. The data table gives the values.`}
       </p>
       <div className="chart-drawing">
         <ResponsiveContainer width="100%" height={height} minWidth={200} initialDimension={{ width: 640, height }}>

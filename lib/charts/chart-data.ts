@@ -12,6 +12,10 @@ export type ChartSeries = {
   unit: string;
   /** Which y axis the series is read against. */
   axis: "left" | "right";
+  /** Drawing colour (`phase-colours.ts`); without one the drawing picks by position. */
+  colour?: string;
+  /** In the data table and CSV but not drawn (a quantity that would flatten the others; the chart's note says so). */
+  tableOnly?: boolean;
 };
 
 /** A horizontal line drawn across the chart, such as a temperature limit. */

@@ -1,4 +1,5 @@
 import { seriesKey, unionOfKeys, type ChartData } from "./chart-data";
+import { seriesColours } from "./phase-colours";
 
 /** The volumes of one hydrate assemblage, cm³ per 100 g of binder. */
 export type AssemblageVolumes = {
@@ -29,7 +30,8 @@ export function phaseVolumesChart(assemblages: readonly AssemblageVolumes[], min
   const hasPorosity = assemblages.some((a) => typeof a.emptyPorosityCm3 === "number");
   if (hasSolution) names.push(PORE_SOLUTION);
   if (hasPorosity) names.push(POROSITY);
-  const series = names.map((name, index) => ({ key: seriesKey(index), label: name, unit: "cm³/100 g binder", axis: "left" as const }));
+  const colours = seriesColours(names);
+  const series = names.map((name, index) => ({ key: seriesKey(index), label: name, unit: "cm³/100 g binder", axis: "left" as const, colour: colours[index] }));
   const rows = assemblages.map((a) => {
     const row: Record<string, number | string | null> = { label: a.label };
     phases.forEach((phase, index) => (row[seriesKey(index)] = a.phaseVolumesCm3[phase] ?? 0));

@@ -8,7 +8,7 @@ const PALETTE = ["#1f4e79", "#c55a11", "#548235", "#7030a0", "#bf9000", "#2e75b6
 type Box = { x: number; y: number; width: number; height: number };
 
 function numbersOf(chart: ChartData, axis: "left" | "right", stacked: boolean): number[] {
-  const series = chart.series.filter((s) => s.axis === axis);
+  const series = chart.series.filter((s) => s.axis === axis && !s.tableOnly);
   if (!stacked) return chart.rows.flatMap((row) => series.map((s) => row[s.key]).filter((v): v is number => typeof v === "number" && Number.isFinite(v)));
   return chart.rows.map((row) => series.reduce((sum, s) => sum + (typeof row[s.key] === "number" ? (row[s.key] as number) : 0), 0));
 }
@@ -42,7 +42,7 @@ export function drawChart(doc: PDFKit.PDFDocument, chart: ChartData, box: Box): 
   const xt = (x: number) => (logX ? Math.log10(x) : x);
   const [xLow, xHigh] = category ? [-0.5, rows.length - 0.5] : range(xs.map(xt), false);
   const [yLow, yHigh] = range(numbersOf(chart, "left", stacked).concat(chart.thresholds.filter((t) => t.axis === "left").map((t) => t.value)), true);
-  const rightSeries = chart.series.filter((s) => s.axis === "right");
+  const rightSeries = chart.series.filter((s) => s.axis === "right" && !s.tableOnly);
   const [rLow, rHigh] = range(numbersOf(chart, "right", false), false);
   const px = (x: number) => plot.x + ((xt(x) - xLow) / (xHigh - xLow)) * plot.width;
   const pxIndex = (i: number) => plot.x + ((i - xLow) / (xHigh - xLow)) * plot.width;
@@ -77,8 +77,12 @@ export function drawChart(doc: PDFKit.PDFDocument, chart: ChartData, box: Box): 
   doc.text(pdfSafe(axisCaption(chart.yLeft.label, chart.yLeft.unit)), box.x, plot.y - 10, { width: 200, lineBreak: false });
   if (chart.yRight) doc.text(pdfSafe(axisCaption(chart.yRight.label, chart.yRight.unit)), plot.x + plot.width - 150, plot.y - 10, { width: 190, align: "right", lineBreak: false });
 
-  const leftSeries = chart.series.filter((s) => s.axis === "left");
-  const colour = (key: string) => PALETTE[chart.series.findIndex((s) => s.key === key) % PALETTE.length];
+  const leftSeries = chart.series.filter((s) => s.axis === "left" && !s.tableOnly);
+  // A series' own colour (phase colours, lib/charts/phase-colours.ts), else one by position.
+  const colour = (key: string) => {
+    const index = chart.series.findIndex((s) => s.key === key);
+    return chart.series[index].colour ?? PALETTE[index % PALETTE.length];
+  };
   if (chart.kind === "stacked-bar") {
     const barWidth = (plot.width / Math.max(1, rows.length)) * 0.6;
     rows.forEach((row, i) => {
@@ -129,6 +133,7 @@ export function drawChart(doc: PDFKit.PDFDocument, chart: ChartData, box: Box): 
   let ly = plot.y + plot.height + 24;
   doc.fontSize(6).fillColor("#000");
   for (const s of chart.series) {
+    if (s.tableOnly) continue;
     const label = pdfSafe(`${s.label}${s.axis === "right" ? " (right axis)" : ""}`);
     const width = doc.widthOfString(label) + 16;
     if (lx + width > plot.x + plot.width) (lx = plot.x), (ly += 9);

@@ -42,3 +42,43 @@ describe("scenario sweep chart", () => {
     expect(chart.id).toBe("sweep-sulfate");
   });
 });
+
+describe("scenario sweep chart of a scenario that adds a solution with its water", () => {
+  // Sulfate ingress adds the sulfate solution with its water: litres of pore solution per 100 g binder (numbers invented).
+  const flooded: ScenarioSweep = {
+    id: "sulfate",
+    title: "Sulfate ingress",
+    doseLabel: "Sulfate taken up",
+    doseUnit: "mmol SO4 per 100 g binder",
+    points: [
+      { dose: 0, phaseVolumesCm3: { csh: 30, ettringite: 5, "pore-solution": 20 }, pH: 13.5 },
+      { dose: 100, phaseVolumesCm3: { csh: 28, ettringite: 12, "pore-solution": 5600 }, pH: 13.0 },
+    ],
+  };
+
+  it("keeps the pore solution in the table but does not draw it when it exceeds the solids, and says so in the note", () => {
+    const chart = scenarioSweepChart(flooded);
+    const solution = chart.series.find((s) => s.label === "pore-solution")!;
+    expect(solution.tableOnly).toBe(true);
+    expect(chart.rows[1][solution.key]).toBe(5600);
+    expect(chart.series.filter((s) => s.label !== "pore-solution").every((s) => !s.tableOnly)).toBe(true);
+    expect(chart.note).toMatch(/5600 cm³\/100 g binder against 40 cm³ of solids/);
+  });
+
+  it("draws the pore solution stacked on the solids when it is smaller than they are (the paste volume)", () => {
+    const paste: ScenarioSweep = { ...flooded, points: flooded.points.map((p) => ({ ...p, phaseVolumesCm3: { ...p.phaseVolumesCm3, "pore-solution": 20 } })) };
+    const chart = scenarioSweepChart(paste);
+    expect(chart.series.some((s) => s.tableOnly)).toBe(false);
+    expect(chart.note).not.toMatch(/not drawn/);
+  });
+});
+
+describe("scenario sweep chart without a pore solution at any point (dried solids)", () => {
+  it("has no pH series and no right axis, and says why", () => {
+    const dry: ScenarioSweep = { id: "drying", title: "Solids after drying", doseLabel: "Relative humidity", doseUnit: "%", points: [{ dose: 30, phaseVolumesCm3: { ettringite: 5 }, pH: null }, { dose: 60, phaseVolumesCm3: { ettringite: 6 }, pH: null }] };
+    const chart = scenarioSweepChart(dry);
+    expect(chart.series.map((s) => s.label)).toEqual(["ettringite"]);
+    expect(chart.yRight).toBeUndefined();
+    expect(chart.note).toMatch(/no pH/);
+  });
+});

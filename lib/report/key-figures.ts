@@ -1,4 +1,5 @@
 import type { Flag } from "../advisory/flag";
+import { CARBONATION_TIME_REPORTING_LIMIT_YEARS } from "../scenarios/carbonation-depth";
 
 /**
  * Reading a saved result for comparisons and reports. Saved results are stored as JSON and may come
@@ -7,11 +8,11 @@ import type { Flag } from "../advisory/flag";
  */
 export type KeyFigure = { id: string; label: string; unit: string; value: number | string };
 
-type FigureDefinition = { id: string; label: string; unit: string; paths: string[][]; scale?: number };
+type FigureDefinition = { id: string; label: string; unit: string; paths: string[][]; scale?: number; reportedUpTo?: number };
 
 /**
  * Where the key figures sit in an assessment result (`lib/service/assess.ts`; first path that holds a
- * number or text wins; `scale` converts, e.g. a fraction to per cent).
+ * number or text wins; `scale` converts, e.g. a fraction to per cent; a value above `reportedUpTo` is shown as "more than" it).
  */
 const FIGURES: readonly FigureDefinition[] = [
   { id: "pH", label: "Pore solution pH", unit: "", paths: [["assemblage", "paste", "poreSolution", "pH"], ["assemblage", "pH"]] },
@@ -22,7 +23,7 @@ const FIGURES: readonly FigureDefinition[] = [
   { id: "portlanditeExhaustedSulfate", label: "Sulfate dose that exhausts portlandite", unit: "mmol SO4/100 g binder", paths: [["scenarios", "sulfate", "summary", "portlanditeExhaustedDoseMmolPer100g"]] },
   { id: "co2BindingCapacity", label: "CO2 binding capacity", unit: "mol/m³ concrete", paths: [["scenarios", "carbonation", "summary", "co2BindingCapacityMolPerM3"]] },
   { id: "carbonationCoefficient", label: "Carbonation coefficient", unit: "mm/√year", paths: [["scenarios", "carbonation", "depth", "coefficientMmPerSqrtYear"]] },
-  { id: "carbonationTimeToCover", label: "Time for carbonation to reach the cover", unit: "years", paths: [["scenarios", "carbonation", "depth", "timeToCoverYears"]] },
+  { id: "carbonationTimeToCover", label: "Time for carbonation to reach the cover", unit: "years", paths: [["scenarios", "carbonation", "depth", "timeToCoverYears"]], reportedUpTo: CARBONATION_TIME_REPORTING_LIMIT_YEARS },
   { id: "peakTemperature", label: "Peak core temperature", unit: "°C", paths: [["curing", "temperature", "peakCoreC"]] },
   { id: "maxDifference", label: "Largest core–surface difference", unit: "°C", paths: [["curing", "temperature", "maxDifferenceC"]] },
   { id: "minimumCuring", label: "Minimum curing period", unit: "d", paths: [["curing", "minimumCuringDays"]] },
@@ -50,7 +51,9 @@ export function keyFigures(result: unknown): KeyFigure[] {
     for (const path of figure.paths) {
       const value = valueAt(result, path);
       if (isFigureValue(value)) {
-        out.push({ id: figure.id, label: figure.label, unit: figure.unit, value: typeof value === "number" && figure.scale ? value * figure.scale : value });
+        const scaled = typeof value === "number" && figure.scale ? value * figure.scale : value;
+        const reported = typeof scaled === "number" && figure.reportedUpTo !== undefined && scaled > figure.reportedUpTo ? `more than ${figure.reportedUpTo}` : scaled;
+        out.push({ id: figure.id, label: figure.label, unit: figure.unit, value: reported });
         break;
       }
     }

@@ -43,6 +43,20 @@ export const SECONDS_PER_YEAR = 365.25 * 86_400;
 /** 0 °C in K (definition). */
 const KELVIN_OFFSET = 273.15;
 
+/**
+ * Times beyond this are reported as "more than" it, years: design working lives are at most 100 years (EN 1990
+ * Table 2.1, category 5) and the Papadakis model was fitted to decades of exposure, so a figure of thousands of
+ * years says only that the front does not arrive within any working life (common practice).
+ */
+export const CARBONATION_TIME_REPORTING_LIMIT_YEARS = 1000;
+
+/** A time for the carbonation front as reported: rounded years, "more than 1000 years", or "never" (no front progress). */
+export function describeCarbonationTime(years: number): string {
+  if (!Number.isFinite(years)) return "never (no progress in water-saturated pores)";
+  if (years > CARBONATION_TIME_REPORTING_LIMIT_YEARS) return `more than ${CARBONATION_TIME_REPORTING_LIMIT_YEARS} years`;
+  return `about ${years.toFixed(0)} years`;
+}
+
 /** Relative humidity below which the carbonation reaction, not diffusion, is limiting and the model overestimates (about 50 %, Papadakis et al. 1991; from memory). */
 export const REACTION_LIMITED_BELOW_RH_PERCENT = 50;
 

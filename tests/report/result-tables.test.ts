@@ -29,6 +29,17 @@ describe("keyFigures of a real assessment", () => {
   });
 });
 
+describe("keyFigures of the carbonation time", () => {
+  const withTime = (timeToCoverYears: number) => ({ scenarios: { carbonation: { depth: { timeToCoverYears } } } });
+  const timeOf = (result: unknown) => keyFigures(result).find((f) => f.id === "carbonationTimeToCover")?.value;
+
+  it("gives the years up to 1000 and 'more than 1000' beyond (design working lives are at most 100 years, EN 1990 Table 2.1)", () => {
+    expect(timeOf(withTime(62.5))).toBe(62.5);
+    expect(timeOf(withTime(1000))).toBe(1000);
+    expect(timeOf(withTime(19780))).toBe("more than 1000");
+  });
+});
+
 describe("the report model of a real assessment", () => {
   it("carries the page's charts (the shared mapping) for the assemblage, both scenarios and the timeline", async () => {
     const { resultCharts } = await import("../../lib/charts/result-charts");

@@ -2,6 +2,7 @@ import { describe, it, expect } from "vitest";
 import fc from "fast-check";
 import { powersCapillaryPorosity, powersPasteFractions } from "../../lib/cement/powers-model";
 import {
+  CARBONATION_TIME_REPORTING_LIMIT_YEARS,
   CARBONATION_VOLUME_CHANGE_CH_M3_PER_MOL,
   carbonationCoefficientMmPerSqrtYear,
   carbonationDepthMm,
@@ -9,6 +10,7 @@ import {
   co2BindingCapacityFromOxidesMolPerM3,
   co2BindingCapacityFromPhasesMolPerM3,
   co2ConcentrationMolPerM3,
+  describeCarbonationTime,
   estimateCarbonation,
   papadakisConstituentsFromOxidesMolPerM3,
   papadakisEffectiveDiffusivityM2PerS,
@@ -154,5 +156,14 @@ describe("estimateCarbonation", () => {
     expect(r).toEqual({ ok: false, error: { code: "invalid-input", field: "pastePorosity", message: "pastePorosity must be strictly within 0–1, got 1.2" } });
     const b = estimateCarbonation({ pastePorosity: 0.3, relativeHumidityPercent: 65, bindingCapacityMolPerM3: 0 });
     expect(!b.ok && b.error.field).toBe("bindingCapacityMolPerM3");
+  });
+});
+
+describe("describeCarbonationTime", () => {
+  it("rounds to whole years up to 1000, says 'more than 1000 years' beyond and 'never' for saturated pores (EN 1990 Table 2.1: working lives up to 100 years)", () => {
+    expect(describeCarbonationTime(62.4)).toBe("about 62 years");
+    expect(describeCarbonationTime(1000)).toBe("about 1000 years");
+    expect(describeCarbonationTime(19780)).toBe(`more than ${CARBONATION_TIME_REPORTING_LIMIT_YEARS} years`);
+    expect(describeCarbonationTime(Number.POSITIVE_INFINITY)).toMatch(/^never/);
   });
 });

@@ -2,6 +2,7 @@ import type { Flag } from "../flag";
 import { advisoryThresholds } from "../thresholds";
 import type { ExposureInput } from "../../schema/exposure-input";
 import type { CarbonationScenario } from "../../scenarios/carbonation";
+import { describeCarbonationTime } from "../../scenarios/carbonation-depth";
 
 /**
  * `carbonation-depassivation`: the carbonation front (Papadakis model with the engine's binding capacity)
@@ -23,7 +24,7 @@ export function carbonationDepassivationFlag(
     explanation:
       `CO2 from the air turns portlandite and C-S-H into calcite (Ca(OH)2 + CO2 → CaCO3 + H2O); the paste binds ${s.co2BindingCapacityMolPerM3.toFixed(0)} mol CO2 per m³ of concrete before it is fully carbonated, ` +
       `and its pore solution falls below pH ${s.depassivationPH} after ${s.depassivationUptakeMolPerM3?.toFixed(0) ?? "—"} mol/m³. ` +
-      `With the Papadakis diffusion model the carbonation coefficient is ${result.depth.coefficientMmPerSqrtYear.toFixed(1)} mm/√year, so the front reaches ${context.exposure.coverMm ?? "the"} mm cover in about ${Number.isFinite(years) ? years.toFixed(0) : "∞"} years (design working life ${life} years).`,
+      `With the Papadakis diffusion model the carbonation coefficient is ${result.depth.coefficientMmPerSqrtYear.toFixed(1)} mm/√year, so the front reaches ${context.exposure.coverMm ?? "the"} mm cover in ${describeCarbonationTime(years)} (design working life ${life} years).`,
     basis: "Papadakis, Vayenas & Fardis 1991, ACI Mater. J. 88, 363; depassivation below pH about 9 (Broomfield 2007, common practice); EN 1990 design working life; EN 206 XC classes and EN 1992-1-1 Table 4.4N minimum cover govern.",
     actions: [
       "Check the cover against EN 1992-1-1 Table 4.4N (or ACI 318 Table 20.5.1.3) for the XC class and the design working life.",

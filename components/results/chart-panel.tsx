@@ -18,6 +18,7 @@ import {
   XAxis,
   YAxis,
 } from "recharts";
+import { formatTick, xAxisTicks } from "../../lib/charts/axis-ticks";
 import { axisCaption, type ChartData } from "../../lib/charts/chart-data";
 import { chartCsv, chartCsvFileName } from "../../lib/charts/csv";
 import { DataTable } from "./data-table";
@@ -46,6 +47,7 @@ function downloadCsv(chart: ChartData) {
 
 function Axes({ chart }: { chart: ChartData }) {
   const xIsNumber = chart.x.scale !== "category";
+  const ticks = xIsNumber ? xAxisTicks(chart) : undefined;
   return (
     <>
       <CartesianGrid strokeDasharray="3 3" />
@@ -53,13 +55,15 @@ function Axes({ chart }: { chart: ChartData }) {
         dataKey={chart.x.key}
         type={xIsNumber ? "number" : "category"}
         scale={chart.x.scale === "log" ? "log" : "auto"}
-        domain={xIsNumber ? ["auto", "auto"] : undefined}
+        domain={!xIsNumber ? undefined : chart.x.scale === "log" ? ["dataMin", "dataMax"] : ticks ? [ticks[0], ticks[ticks.length - 1]] : ["auto", "auto"]}
+        ticks={ticks}
+        tickFormatter={xIsNumber ? (value: number) => formatTick(value) : undefined}
         allowDataOverflow={false}
         label={{ value: axisCaption(chart.x.label, chart.x.unit), position: "insideBottom", offset: -10 }}
       />
-      <YAxis yAxisId="left" label={{ value: axisCaption(chart.yLeft.label, chart.yLeft.unit), angle: -90, position: "insideLeft", style: { textAnchor: "middle" } }} />
+      <YAxis yAxisId="left" tickFormatter={(value: number) => formatTick(value)} label={{ value: axisCaption(chart.yLeft.label, chart.yLeft.unit), angle: -90, position: "insideLeft", style: { textAnchor: "middle" } }} />
       {chart.yRight ? (
-        <YAxis yAxisId="right" orientation="right" domain={["auto", "auto"]} label={{ value: axisCaption(chart.yRight.label, chart.yRight.unit), angle: 90, position: "insideRight", style: { textAnchor: "middle" } }} />
+        <YAxis yAxisId="right" orientation="right" domain={["auto", "auto"]} tickFormatter={(value: number) => formatTick(value)} label={{ value: axisCaption(chart.yRight.label, chart.yRight.unit), angle: 90, position: "insideRight", style: { textAnchor: "middle" } }} />
       ) : null}
       <Tooltip />
       {/* Legend text in the page's text colour: light phase colours (empty pores, amorphous silica) would be unreadable as text. */}

@@ -26,8 +26,13 @@ import {
   scmTypeChoices,
   seawaterChoices,
   seawaterValue,
+  strengthClassChoices,
+  sulfateResistanceChoices,
   wettingChoices,
+  yesNoChoices,
+  yesNoOrUndefined,
 } from "./form-choices";
+import { formValuesOf } from "./form-values";
 
 const schemaResolver = zodResolver(assessInput);
 
@@ -47,7 +52,7 @@ export type AssessmentFormProps = {
 export function AssessmentForm({ onSubmit, initialValues, busy = false, submitLabel = "Run the assessment" }: AssessmentFormProps) {
   const methods = useForm<AssessInputRaw, unknown, AssessInput>({
     resolver,
-    defaultValues: initialValues ?? newAssessmentDefaults,
+    defaultValues: initialValues ? formValuesOf(initialValues) : newAssessmentDefaults,
     shouldUnregister: true,
     mode: "onSubmit",
     reValidateMode: "onChange",
@@ -87,7 +92,7 @@ export function AssessmentForm({ onSubmit, initialValues, busy = false, submitLa
     setHeatCurve(Boolean(culvertDemo.curing?.thermal?.heatCurve));
     setMonteCarlo(false);
     setServiceTemperatureMode(serviceTemperatureModeOf(culvertDemo.exposure.serviceTemperatureC));
-    setPendingReset(structuredClone(culvertDemo));
+    setPendingReset(formValuesOf(culvertDemo));
     setDemoLoaded(true);
   };
 
@@ -270,9 +275,21 @@ function MixSection() {
       <div className="row">
         <NumberField name="mix.aggregateVolume.value" label="Aggregate volume" unit="L/m³" hint="0–850 L/m³; empty: the rest of the cubic metre." />
         <input type="hidden" value="litresPerM3" {...useFormContextTyped().register("mix.aggregateVolume.unit")} />
-        <NumberField name="mix.airVolume.value" label="Air" unit="L/m³" hint="0–150 L/m³ (10 L/m³ = 1 %); entrapped air is typically 10–20 L/m³ (common practice)." />
+        <NumberField name="mix.airVolume.value" label="Air" unit="L/m³" hint="0–150 L/m³ (10 L/m³ = 1 %); entrapped air is typically 10–20 L/m³ (common practice). Also compared with the air content required for freeze–thaw classes." />
         <input type="hidden" value="litresPerM3" {...useFormContextTyped().register("mix.airVolume.unit")} />
       </div>
+      <fieldset className="subsection">
+        <legend>Specification (for the exposure-class limits)</legend>
+        <p className="hint">Compared with EN 206 Annex F and ACI 318 Table 19.3.2.1; an item left empty is reported as not assessed.</p>
+        <div className="row">
+          <SelectField name="specification.strengthClass" label="Strength class" choices={strengthClassChoices} emptyLabel="not stated" hint="EN 206 Table 12; its fck,cyl is also compared with the ACI 318 f'c minimums." />
+          <NumberField name="specification.specifiedStrengthMPa" label="Specified strength" unit="MPa" hint="Cylinder f'c (ACI 318) or fck,cyl, 8–100 MPa; used when no class is chosen." />
+        </div>
+        <div className="row">
+          <SelectField name="specification.sulfateResistance" label="Sulfate resistance of the binder" choices={sulfateResistanceChoices} emptyLabel="not stated" hint="As certified for the cement or the blend." />
+          <SelectField name="specification.calciumChlorideAdmixture" label="Calcium chloride admixture" choices={yesNoChoices} emptyLabel="not stated" setValueAs={yesNoOrUndefined} />
+        </div>
+      </fieldset>
     </fieldset>
   );
 }

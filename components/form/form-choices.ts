@@ -3,6 +3,7 @@ import scmPresets from "../../lib/data/binders/scm-presets.json";
 import surfaceCovers from "../../lib/data/curing/surface-covers.json";
 import { elementTypes } from "../../lib/schema/assess-input";
 import { scmTypes } from "../../lib/schema/binder-input";
+import { strengthClasses } from "../../lib/schema/specification-input";
 import type { Choice } from "./fields";
 
 /** Choices of the form's selects, from the schema and the data files (never typed twice). */
@@ -43,3 +44,19 @@ export const seawaterChoices: Choice[] = [
 
 /** The seawater select's value in the schema's terms ("yes" → true). */
 export const seawaterValue = (v: unknown): boolean | string | undefined => (v === "" || v === undefined || v === null ? undefined : v === "yes" ? true : String(v));
+
+export const strengthClassChoices: Choice[] = strengthClasses.map((c) => ({ value: c, label: c }));
+
+export const sulfateResistanceChoices: Choice[] = [
+  { value: "none", label: "none (e.g. CEM I, ASTM C150 Type I)" },
+  { value: "MS", label: "moderate, MS (ASTM C150 Type II, C595 (MS), C1157 MS)" },
+  { value: "HS", label: "high, HS (ASTM C150 Type V, C595 (HS), C1157 HS; EN 197-1 SR)" },
+];
+
+export const yesNoChoices: Choice[] = [
+  { value: "no", label: "no" },
+  { value: "yes", label: "yes" },
+];
+
+/** A yes/no select's value for the schema: true, false, or undefined when not stated. */
+export const yesNoOrUndefined = (value: unknown): boolean | undefined => (value === "yes" || value === true ? true : value === "no" || value === false ? false : undefined);

@@ -34,6 +34,8 @@ export const culvertDemo: AssessInputRaw = {
     aggregateVolume: { unit: "litresPerM3", value: 700 },
     airVolume: { unit: "litresPerM3", value: 20 },
   },
+  // C35/45 (fck,cyl 35 MPa) matches the thermal model's mean strength of 43 MPa (fcm = fck + 8 MPa, EN 1992-1-1 Table 3.1).
+  specification: { strengthClass: "C35/45" },
   age: { mode: "age", ageDays: 28, curingTemperatureC: 20 },
   exposure: {
     sulfateMgPerL: 1800,

@@ -2,6 +2,7 @@ import { z } from "zod";
 import { ageInputSchema, binderInputSchema, cementInputSchema, mixInputSchema, scmInputSchema } from "./binder-input";
 import { curingInputSchema } from "./curing-input";
 import { exposureInput } from "./exposure-input";
+import { specificationInput } from "./specification-input";
 
 /**
  * The assessment input: one schema for the form, the API (`POST /api/v1/assess`) and the CLI
@@ -49,6 +50,8 @@ export const assessInput = z
     project: projectInput.optional(),
     binder: z.object({ cement: cementInputSchema, supplementaryMaterials: z.array(scmInputSchema).default([]) }, { error: "binder must be an object with cement" }),
     mix: mixInputSchema,
+    /** Strength class, sulfate resistance and the like, for the exposure-class comparison only. */
+    specification: specificationInput.optional(),
     age: ageInputSchema,
     exposure: exposureInput,
     curing: z

@@ -3,6 +3,7 @@ import { hydratePaste, type HydratedPaste } from "../cement/hydrate-paste";
 import { hydrationTimeline, type TimelineEntry } from "../cement/hydration-timeline";
 import { classifyExposure, type ExposureClassification } from "../advisory/exposure-classes";
 import { checkCompliance, type ComplianceResult } from "../advisory/exposure-compliance";
+import { mixForCompliance } from "../advisory/mix-for-compliance";
 import { sortFlags, type Flag } from "../advisory/flag";
 import { carbonationDepassivationFlag } from "../advisory/flag-rules/carbonation-depassivation";
 import { gypsumFormationFlag } from "../advisory/flag-rules/gypsum-formation";
@@ -228,7 +229,7 @@ export function assessWithDataset(input: AssessInput, binder: BinderSystem, data
   }
 
   const exposureClasses = classifyExposure(exposure);
-  const compliance = checkCompliance({ waterBinderRatio: input.mix.waterBinderRatio, binderContentKgPerM3: input.mix.binderContentKgPerM3 }, exposureClasses);
+  const compliance = checkCompliance(mixForCompliance({ mix: input.mix, specification: input.specification, supplementaryMaterials: binder.binder.supplementaryMaterials }), exposureClasses);
   flags.push(...compliance.flags);
 
   const { state: _state, ...assemblageWithoutState } = paste.value.assemblage;

@@ -68,6 +68,31 @@ describe("assessment form validation", () => {
     expect(input.curing.thermal.element.thicknessM).toBe(0.45);
     expect(input.curing.thermal.concrete).toMatchObject({ binderKgPerM3: 360, waterBinderRatio: 0.45, fcm28MPa: 43 });
     expect(input.curing.thermal.ambient).toEqual({ kind: "daily-sine", meanC: 22, amplitudeC: 6 });
+    expect(input.specification).toMatchObject({ strengthClass: "C35/45" });
+  });
+
+  it("submits the specification for the exposure-class limits (strength class, sulfate resistance, calcium chloride) and leaves unstated items out", async () => {
+    const onSubmit = vi.fn();
+    render(<AssessmentForm onSubmit={onSubmit} />);
+    type(/Project name/, "Spec wall");
+    type(/^Thickness/, "0.3");
+    type(/Water\/binder ratio/, "0.45");
+    type(/Binder content/, "360");
+    fireEvent.change(screen.getByLabelText(/^Strength class/), { target: { value: "C40/50" } });
+    fireEvent.change(screen.getByLabelText(/Sulfate resistance of the binder/), { target: { value: "HS" } });
+    fireEvent.change(screen.getByLabelText(/Calcium chloride admixture/), { target: { value: "no" } });
+    fireEvent.click(screen.getByRole("button", { name: /run the assessment/i }));
+    await waitFor(() => expect(onSubmit).toHaveBeenCalledTimes(1));
+    const specification = onSubmit.mock.calls[0][0].specification;
+    expect(specification).toMatchObject({ strengthClass: "C40/50", sulfateResistance: "HS", calciumChlorideAdmixture: false });
+    expect(specification.specifiedStrengthMPa).toBeUndefined();
+  });
+
+  it("reopens a saved input with its yes/no selects showing the saved answers (booleans in the schema)", () => {
+    const saved = { ...culvertDemo, exposure: { ...culvertDemo.exposure, seawater: true }, specification: { calciumChlorideAdmixture: true } };
+    render(<AssessmentForm onSubmit={vi.fn()} initialValues={saved} />);
+    expect((screen.getByLabelText(/Calcium chloride admixture/) as HTMLSelectElement).value).toBe("yes");
+    expect((screen.getByLabelText(/^Sea water/) as HTMLSelectElement).value).toBe("yes");
   });
 
   it("groups the sections in fieldsets with legends in the order an engineer fills them", () => {

@@ -17,7 +17,12 @@ import { missingFileMessage, resolveWorkerFiles, startWorkerThread, WorkerJobErr
  * - At most `maxQueued` requests wait: one more is answered at once with the typed `busy` error (503 on the routes),
  *   rather than waiting out its time limit behind the others.
  */
-export type PoolRunOptions = { signal?: AbortSignal; onProgress?: (fraction: number) => void };
+export type PoolRunOptions = {
+  signal?: AbortSignal;
+  onProgress?: (fraction: number) => void;
+  /** Called when the request leaves the queue for a worker (a job registry then reports it running, not queued). */
+  onStart?: () => void;
+};
 
 export type PoolStats = { workers: number; busy: number; queued: number };
 
@@ -167,6 +172,7 @@ export function createComputationPool<T>(module: WorkerModule, options: Computat
       slot.worker.ref();
       try {
         slot.worker.postMessage({ id: request.id, raw: request.raw });
+        request.options.onStart?.();
       } catch (caught) {
         release(slot, request);
         request.reject(new WorkerJobError(`the input cannot be sent to the worker: ${caught instanceof Error ? caught.message : String(caught)}`));

@@ -1,11 +1,13 @@
 import { randomUUID } from "node:crypto";
+import type { ComputationPool } from "./computation-pool";
 import { domainError, type ServiceError, type ServiceOutcome } from "./outcome";
 
 /**
  * The registry of jobs for long computations (Monte Carlo assessments): started off the request path, polled
  * for progress, cancellable through an AbortSignal. Where the work runs is the runner's affair: the
- * assessment jobs use `workerJobRunner` (a worker thread per job, terminated on cancel), tests may pass an
- * in-process runner. The registry is kept in memory: a restart forgets the jobs (the page then starts
+ * assessment jobs use `poolJobRunner` (the long-lived workers of the job pool, `assess-jobs.ts`), tests may pass an
+ * in-process runner or `workerJobRunner` (a worker thread per job). A job is "queued" until its runner reports
+ * that it started (`onStart`; a runner that never does leaves it to the first progress report), then "running". The registry is kept in memory: a restart forgets the jobs (the page then starts
  * again). Finished jobs are kept for `retentionMs` and then dropped; at most `maxActive` run at once,
  * more → `busy` (503).
  */
@@ -22,7 +24,15 @@ export type JobStatus<T> = {
   error?: ServiceError;
 };
 
-export type JobRunner<T> = (raw: unknown, options: { signal: AbortSignal; onProgress: (fraction: number) => void }) => Promise<ServiceOutcome<T>>;
+export type JobRunner<T> = (
+  raw: unknown,
+  options: { signal: AbortSignal; onProgress: (fraction: number) => void; onStart?: () => void },
+) => Promise<ServiceOutcome<T>>;
+
+/** A runner on a computation pool: the job waits in the pool's queue, then computes on a long-lived worker. */
+export function poolJobRunner<T>(pool: () => Pick<ComputationPool<T>, "run">): JobRunner<T> {
+  return (raw, options) => pool().run(raw, options);
+}
 
 export type JobRegistryOptions = {
   /** Jobs running at once (default 2). */
@@ -73,11 +83,15 @@ export function createJobRegistry<T>(runner: JobRunner<T>, options: JobRegistryO
 
   async function execute(job: Job<T>, raw: unknown) {
     if (job.controller.signal.aborted) return;
-    job.state = "running";
+    const started = () => {
+      if (job.state === "queued") job.state = "running";
+    };
     try {
       const outcome = await runner(raw, {
         signal: job.controller.signal,
+        onStart: started,
         onProgress: (fraction) => {
+          started();
           if (isActive(job) && Number.isFinite(fraction)) job.progress = Math.min(1, Math.max(job.progress, fraction));
         },
       });

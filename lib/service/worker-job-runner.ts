@@ -5,8 +5,10 @@ import type { JobRunner } from "./jobs";
 import { domainError, type ServiceOutcome } from "./outcome";
 
 /**
- * A job runner that computes in a Node worker thread, so the server's main thread keeps answering requests
- * while a long computation (a Monte Carlo assessment) runs. The worker reports progress by messages and ends
+ * Worker threads for computations: the files and start-up shared with the computation pool (`computation-pool.ts`,
+ * which the service's assessment jobs and `POST /api/v1/assess` use), and a job runner with a fresh worker per job
+ * (`workerJobRunner`: for a computation that should not share a long-lived worker's memory), so the server's main
+ * thread keeps answering requests while a long computation runs. The worker reports progress by messages and ends
  * with one outcome message; cancelling (or the registry's time limit) aborts the signal, which terminates the
  * worker at once, wherever the computation is.
  *
@@ -69,7 +71,7 @@ export function liveWorkerCount(): number {
 export class WorkerJobError extends Error {}
 
 export function workerJobRunner<T>(module: WorkerModule): JobRunner<T> {
-  return (raw, { signal, onProgress }) =>
+  return (raw, { signal, onProgress, onStart }) =>
     new Promise<ServiceOutcome<T>>((resolve, reject) => {
       if (signal.aborted) return resolve(domainError("cancelled", "cancelled before the worker started"));
       const files = resolveWorkerFiles(module);
@@ -77,6 +79,7 @@ export function workerJobRunner<T>(module: WorkerModule): JobRunner<T> {
 
       const worker = startWorkerThread({ modulePath: files.modulePath, exportName: module.exportName, raw });
       liveWorkers.add(worker);
+      onStart?.();
       let settled = false;
       const settle = (finish: () => void) => {
         if (settled) return;

@@ -3,7 +3,7 @@ import { POST as assess } from "../../app/api/v1/assess/route";
 import { POST as startJob } from "../../app/api/v1/assess/jobs/route";
 import { DELETE as cancelJob, GET as jobStatus } from "../../app/api/v1/assess/jobs/[id]/route";
 import { GET as health } from "../../app/api/v1/health/route";
-import { liveWorkerCount } from "../../lib/service/worker-job-runner";
+import { assessmentJobPool } from "../../lib/service/assess-jobs";
 import { culvertDemo } from "../../lib/demo/culvert-demo";
 import { runningVersions } from "../../lib/service/versions";
 import { context, json, jsonRequest } from "./request";
@@ -77,7 +77,7 @@ describe("the assessment job API", () => {
     expect(later.progress as number).toBeLessThan(1);
   });
 
-  it("computes the job in a worker thread: other requests are answered meanwhile, and cancel ends the worker", async () => {
+  it("computes the job on the job pool's worker thread: other requests are answered meanwhile, and cancel ends the worker", async () => {
     const started = await json(await startJob(jsonRequest("/assess/jobs", "POST", monteCarlo(1000)), context()));
     const id = started.id as string;
     const statusOf = async () => json(await jobStatus(jsonRequest(`/assess/jobs/${id}`, "GET"), context({ id })));
@@ -86,17 +86,36 @@ describe("the assessment job API", () => {
       if (waitedMs > 120_000) throw new Error("the job reported no progress");
       await new Promise((resolve) => setTimeout(resolve, 50));
     }
-    expect(liveWorkerCount()).toBe(1);
+    expect(assessmentJobPool().stats()).toMatchObject({ workers: 1, busy: 1 });
     const answer = await health(jsonRequest("/health", "GET"), context());
     expect(answer.status).toBe(200);
     expect((await statusOf()).state).toBe("running");
     await cancelJob(jsonRequest(`/assess/jobs/${id}`, "DELETE"), context({ id }));
-    for (let waitedMs = 0; liveWorkerCount() > 0; waitedMs += 20) {
+    for (let waitedMs = 0; assessmentJobPool().stats().workers > 0; waitedMs += 20) {
       if (waitedMs > 30_000) throw new Error("the cancelled job's worker did not exit");
       await new Promise((resolve) => setTimeout(resolve, 20));
     }
     expect((await statusOf()).state).toBe("cancelled");
   });
+
+  it("keeps a second job queued while the job pool's one worker computes the first, then runs it on the same long-lived worker", async () => {
+    const first = await json(await startJob(jsonRequest("/assess/jobs", "POST", monteCarlo(1000)), context()));
+    const second = await json(await startJob(jsonRequest("/assess/jobs", "POST", monteCarlo(10)), context()));
+    const statusOf = async (id: string) => json(await jobStatus(jsonRequest(`/assess/jobs/${id}`, "GET"), context({ id })));
+    for (let waitedMs = 0; (await statusOf(first.id as string)).state !== "running"; waitedMs += 50) {
+      if (waitedMs > 120_000) throw new Error("the first job did not start");
+      await new Promise((resolve) => setTimeout(resolve, 50));
+    }
+    expect((await statusOf(second.id as string)).state).toBe("queued");
+    expect(assessmentJobPool().stats()).toMatchObject({ busy: 1, queued: 1 });
+    await cancelJob(jsonRequest(`/assess/jobs/${first.id}`, "DELETE"), context({ id: first.id as string }));
+    const finished = await pollUntilFinished(second.id as string);
+    expect(finished.state, JSON.stringify(finished.error)).toBe("succeeded");
+    // A third job reuses the worker the second ran on: no worker is started or stopped in between.
+    const third = await json(await startJob(jsonRequest("/assess/jobs", "POST", monteCarlo(10)), context()));
+    expect((await pollUntilFinished(third.id as string)).state).toBe("succeeded");
+    expect(assessmentJobPool().stats()).toEqual({ workers: 1, busy: 0, queued: 0 });
+  }, 240_000);
 
   it("answers 422 at once for invalid input instead of starting a job", async () => {
     const response = await startJob(jsonRequest("/assess/jobs", "POST", { ...culvertDemo, mix: { ...culvertDemo.mix, waterBinderRatio: 0.1 } }), context());

@@ -39,6 +39,26 @@ describe("the job registry", () => {
     expect(done.ok && [done.value.state, done.value.progress, done.value.result]).toEqual(["succeeded", 1, { steps: 2 }]);
   });
 
+  it("keeps a job queued until its runner reports that it started (a pool's queue), then running", async () => {
+    let start: (() => void) | undefined;
+    let finish: (() => void) | undefined;
+    const runner: JobRunner<string> = (_raw, { onStart }) =>
+      new Promise((resolve) => {
+        start = onStart;
+        finish = () => resolve({ ok: true, value: "done" });
+      });
+    const jobs = createJobRegistry(runner);
+    const started = jobs.start({});
+    const id = started.ok ? started.value.id : "";
+    await tick();
+    expect(jobs.status(id).ok && (jobs.status(id) as { value: { state: string } }).value.state).toBe("queued");
+    start!();
+    expect((jobs.status(id) as { value: { state: string } }).value.state).toBe("running");
+    finish!();
+    await tick();
+    expect((jobs.status(id) as { value: { state: string } }).value.state).toBe("succeeded");
+  });
+
   it("cancels a running job through its AbortSignal", async () => {
     const { runner, release } = steppedRunner(3);
     const jobs = createJobRegistry(runner);

@@ -112,7 +112,7 @@ export function checkEn206(mix: MixForCompliance, classification: ExposureClassi
     const minFck = fckOfClass(limits.minStrengthClass);
     items.push({
       exposureClass, requirement: "min-strength", description: `minimum strength class ${limits.minStrengthClass} (fck,cyl)`, limit: minFck ?? limits.minStrengthClass,
-      actual: mix.strengthClass ?? fck ?? null, unit: "MPa", pass: fck === undefined || minFck === undefined ? null : atLeast(fck, minFck), source,
+      actual: fck ?? null, unit: "MPa", pass: fck === undefined || minFck === undefined ? null : atLeast(fck, minFck), source,
     });
     if (limits.minCementContentKgPerM3 !== null)
       items.push({
@@ -226,6 +226,30 @@ function describeFailure(standard: string, i: ComplianceItem): string {
   return `${standard} ${i.exposureClass}: ${i.description} — limit ${i.limit}${unit}, mix ${i.actual ?? "not given"}`;
 }
 
+/** The governing (tightest) numeric limit of the failed items of one requirement: the smallest maximum or the largest minimum. */
+function governing(failed: readonly ComplianceItem[], requirement: ComplianceItem["requirement"], pick: (a: number, b: number) => number): number | undefined {
+  const limits = failed.filter((i) => i.requirement === requirement && typeof i.limit === "number").map((i) => i.limit as number);
+  return limits.length > 0 ? limits.reduce((a, b) => pick(a, b)) : undefined;
+}
+
+/** What to change, one action per kind of limit not met, with the governing value. */
+function actionsFor(failed: readonly ComplianceItem[]): string[] {
+  const actions: string[] = [];
+  const maxRatio = governing(failed, "max-water-binder-ratio", Math.min);
+  if (maxRatio !== undefined) actions.push(`Lower the water/binder ratio to ${maxRatio} or below (the governing limit of the classes not met).`);
+  const minStrength = governing(failed, "min-strength", Math.max);
+  if (minStrength !== undefined) actions.push(`Specify a strength of at least ${minStrength} MPa (cylinder; EN 206 class or ACI 318 f'c).`);
+  const minBinder = governing(failed, "min-binder-content", Math.max);
+  if (minBinder !== undefined) actions.push(`Raise the binder content to at least ${minBinder} kg/m³.`);
+  if (failed.some((i) => i.requirement === "sulfate-resisting-binder"))
+    actions.push("Use a binder the standard accepts for the sulfate class (EN 197-1 SR cement; ASTM C150 Type V or C595/C1157 HS, with pozzolan or slag where S3 asks for it).");
+  if (failed.some((i) => i.requirement === "min-air-content" || i.requirement === "air-entrainment"))
+    actions.push("Entrain air to the content the freeze–thaw class requires (EN 206 Table F.1; ACI 318 Table 19.3.3.1 for the aggregate size), or prove freeze–thaw resistance by test.");
+  if (failed.some((i) => i.requirement === "calcium-chloride-admixture")) actions.push("Do not use calcium chloride as an admixture in this exposure.");
+  if (failed.some((i) => i.requirement === "max-chloride-ion")) actions.push("Lower the chloride content of the constituents to the class limit (EN 206 Table 15; ACI 318 Table 19.3.2.1).");
+  return actions;
+}
+
 /** The compliance check of a mix against the classes of both standards, with a warning flag where a limit fails. */
 export function checkCompliance(mix: MixForCompliance, classification: ExposureClassification): ComplianceResult {
   const en206 = checkEn206(mix, classification.en206);
@@ -239,11 +263,7 @@ export function checkCompliance(mix: MixForCompliance, classification: ExposureC
       title: "The mix does not meet the limiting values of its exposure classes",
       explanation: `Limits not met: ${failures.join("; ")}.`,
       basis: `${EN206.limitingValues.table} (recommended values; national annex governs); ${ACI318.requirements.table}.`,
-      actions: [
-        "Lower the water/binder ratio or raise the binder content and strength class to the governing limits.",
-        "Use a binder type the standard accepts for the sulfate class (e.g. sulfate-resisting cement, ASTM C150 Type V or C595/C1157 HS).",
-        "Check the limits of the national annex or local code that applies to the project.",
-      ],
+      actions: [...actionsFor([...en206, ...aci318].filter((i) => i.pass === false)), "Check the limits of the national annex or local code that applies to the project."],
     });
   }
   return { en206, aci318, flags, jurisdictionStatement: CAUTIONS["national-annexes-govern"].text };

@@ -70,7 +70,7 @@ export function scenarioSweepChart(sweep: ScenarioSweep, minimumCm3 = 1e-3): Cha
     rows,
     thresholds: [],
     note: [
-      solutionNotDrawn ? "Equilibrium solids at each dose" : "Equilibrium assemblage at each dose",
+      solutionNotDrawn ? "Equilibrium solids at each point of the sweep" : "Equilibrium assemblage at each point of the sweep",
       withPH ? "; pH of the pore solution on the right axis." : "; no pore solution is left at any point, so there is no pH.",
       solutionNotDrawn
         ? ` The pore solution, which holds the added water (up to ${Math.round(largestSolutionCm3)} cm³/100 g binder against ${Math.round(largestSolidsCm3)} cm³ of solids), is in the data table, not drawn.`

@@ -65,3 +65,25 @@ describe("the exposure-class comparison with a specification (EN 206 Annex F Tab
     expect(!r.success && r.error.issues[0].message).toMatch(/^specification\.strengthClass must be one of C8\/10, .*C100\/115 \(EN 206 Table 12\)$/);
   });
 });
+
+describe("the non-compliance flag's actions", () => {
+  it("say what to change for each kind of limit not met, with the governing value (EN 206 Table F.1 XA2: w/c 0.50, C30/37, 320 kg/m³)", () => {
+    const exposure = exposureInput.parse({ sulfateMgPerL: 1800, sulfateCation: "Na", wetting: "permanently-wet", serviceTemperatureC: 12, reinforced: false });
+    const poor = { waterBinderRatio: 0.6, binderContentKgPerM3: 280 };
+    const r = checkCompliance(mixForCompliance({ mix: poor, specification: { strengthClass: "C25/30", sulfateResistance: "none" }, supplementaryMaterials: [] }), classifyExposure(exposure));
+    const actions = r.flags.find((f) => f.id === "exposure-class-noncompliance")!.actions.join("\n");
+    expect(actions).toMatch(/water\/binder ratio to 0\.45 or below/); // ACI 318 S2: 0.45 governs over XA2's 0.50
+    expect(actions).toMatch(/strength of at least 31 MPa/); // ACI 318 S2 f'c 31 MPa over XA2's 30
+    expect(actions).toMatch(/binder content to at least 320 kg\/m³/);
+    expect(actions).toMatch(/SR cement/);
+    expect(actions).not.toMatch(/air/i);
+  });
+
+  it("name only the limits not met: a mix failing w/cm alone gets no binder or strength action", () => {
+    const exposure = exposureInput.parse({ sulfateMgPerL: 1800, sulfateCation: "Na", wetting: "permanently-wet", serviceTemperatureC: 12, reinforced: false });
+    const r = checkCompliance(mixForCompliance({ mix: { waterBinderRatio: 0.48, binderContentKgPerM3: 360 }, specification: { strengthClass: "C35/45", sulfateResistance: "HS" }, supplementaryMaterials: [] }), classifyExposure(exposure));
+    const actions = r.flags.find((f) => f.id === "exposure-class-noncompliance")!.actions;
+    expect(actions[0]).toMatch(/0\.45 or below/);
+    expect(actions.join("\n")).not.toMatch(/strength of at least|binder content to|SR cement/);
+  });
+});

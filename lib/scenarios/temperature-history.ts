@@ -93,9 +93,13 @@ export type TemperatureState = {
    * Saturation index of ettringite in the assemblage equilibrated WITHOUT ettringite: positive where ettringite
    * would form (it is then stable), negative where it is unstable. ΔrG of ettringite formation from the pore
    * solution = −RT ln10 · SI, kJ per mol of Ca6Al2(SO4)3(OH)12·26H2O.
+   *
+   * Null on a Monte Carlo sample's decided path where ettringite is present (`ettringiteMol` > 0): the index is then
+   * positive (at a Gibbs energy minimum that holds a phase, the same system without it is supersaturated with it), and
+   * the sample needs only that sign, not the equilibrium without ettringite that would give its value.
    */
-  ettringiteSaturationIndexWithoutIt: number;
-  ettringiteFormationGibbsKJPerMol: number;
+  ettringiteSaturationIndexWithoutIt: number | null;
+  ettringiteFormationGibbsKJPerMol: number | null;
   sulfate: SulfateDistribution;
   pH: number | null;
   phasesMol: Record<string, number>;
@@ -289,13 +293,17 @@ export function decidedStabilityLimit(
 ): StabilityLimit | undefined {
   const points = [...new Set(decisionTemperaturesC)].sort((a, b) => a - b);
   if (points.length === 0 || points.some((t) => !(t >= range.fromC && t <= range.toC))) return undefined;
-  const known = new Map<number, number>([[atService.temperatureC, atService.ettringiteSaturationIndexWithoutIt]]);
-  if (atCuring) known.set(atCuring.temperatureC, atCuring.ettringiteSaturationIndexWithoutIt);
+  const known = new Map<number, boolean>([[atService.temperatureC, ettringiteStableIn(atService)]]);
+  if (atCuring) known.set(atCuring.temperatureC, ettringiteStableIn(atCuring));
   const stableAt: boolean[] = [];
   for (const t of points) {
-    const si = known.get(t) ?? siWithoutAt(t);
-    if (si === undefined || Number.isNaN(si)) return undefined;
-    stableAt.push(si >= 0);
+    let stable = known.get(t);
+    if (stable === undefined) {
+      const si = siWithoutAt(t);
+      if (si === undefined || Number.isNaN(si)) return undefined;
+      stable = si >= 0;
+    }
+    stableAt.push(stable);
   }
   // One crossing: stable points first, then unstable ones.
   const firstUnstable = stableAt.indexOf(false);
@@ -304,8 +312,13 @@ export function decidedStabilityLimit(
   if (firstUnstable > 0) return { kind: "decided", bracketC: [points[firstUnstable - 1], points[firstUnstable]] };
   // Unstable at every decision temperature: below them, only a stable service state bounds the limit.
   const serviceC = atService.temperatureC;
-  if (serviceC < points[0] && atService.ettringiteSaturationIndexWithoutIt >= 0) return { kind: "decided", bracketC: [serviceC, points[0]] };
+  if (serviceC < points[0] && ettringiteStableIn(atService)) return { kind: "decided", bracketC: [serviceC, points[0]] };
   return undefined;
+}
+
+/** Whether ettringite is stable in a state: its index without it ≥ 0, or, where that was not computed, its presence. */
+export function ettringiteStableIn(state: Pick<TemperatureState, "ettringiteMol" | "ettringiteSaturationIndexWithoutIt">): boolean {
+  return state.ettringiteSaturationIndexWithoutIt === null ? state.ettringiteMol > 0 : state.ettringiteSaturationIndexWithoutIt >= 0;
 }
 
 /** The most supersaturated allowed solid of a paste (suppressed phases excluded), or undefined if none exceeds the tolerance. */
@@ -549,14 +562,15 @@ export function sulfateDistribution(paste: HydratedPaste, dataset: Dataset, bind
   };
 }
 
-function temperatureState(paste: HydratedPaste, without: HydratedPaste, dataset: Dataset, binderContentKgPerM3: number): TemperatureState {
-  const si = without.assemblage.saturationIndices.ettringite ?? Number.NEGATIVE_INFINITY;
+/** The state at a temperature; `without` null: the index without ettringite is not computed (see `TemperatureState`). */
+function temperatureState(paste: HydratedPaste, without: HydratedPaste | null, dataset: Dataset, binderContentKgPerM3: number): TemperatureState {
+  const si = without ? (without.assemblage.saturationIndices.ettringite ?? Number.NEGATIVE_INFINITY) : null;
   return {
     temperatureC: paste.temperatureC,
     ettringiteMol: phaseMoles(paste, "ettringite"),
     ettringiteVolumeCm3: paste.volumes.ettringite ?? 0,
     ettringiteSaturationIndexWithoutIt: si,
-    ettringiteFormationGibbsKJPerMol: formationGibbsKJPerMol(si, paste.temperatureC),
+    ettringiteFormationGibbsKJPerMol: si === null ? null : formationGibbsKJPerMol(si, paste.temperatureC),
     sulfate: sulfateDistribution(paste, dataset, binderContentKgPerM3),
     pH: paste.poreSolution?.pH ?? null,
     phasesMol: Object.fromEntries(paste.assemblage.phases.map((p) => [p.id, p.moles])),
@@ -656,6 +670,8 @@ export function temperatureHistory(
   const at = (t: number) => points.find((p) => p.dose === t)!.paste;
   const stateAt = (t: number): { ok: true; value: TemperatureState } | { ok: false; error: TemperatureHistoryError } => {
     const paste = at(t);
+    // A sample deciding its flag needs only the sign of the index without ettringite: positive where ettringite is present.
+    if (byDecision && phaseMoles(paste, "ettringite") > 0) return { ok: true, value: temperatureState(paste, null, dataset, base.binderContentKgPerM3) };
     const without = withoutEttringite(t, byDistance(points, t));
     if (!without.ok) return { ok: false, error: { ...without.error, dose: t } };
     return { ok: true, value: temperatureState(paste, without.value, dataset, base.binderContentKgPerM3) };

@@ -158,7 +158,7 @@ describe("the comparison of curing (85 °C) and service (20 °C)", () => {
     expect(atService.ettringiteSaturationIndexWithoutIt).toBeGreaterThan(0);
     // ΔrG = −RT ln10 · SI: at 25 °C one log10 unit is 5.708 kJ/mol (R = 8.314462618 J/(mol K), CODATA 2018).
     expect(formationGibbsKJPerMol(1, 25)).toBeCloseTo(-5.708, 3);
-    expect(atService.ettringiteFormationGibbsKJPerMol).toBeCloseTo(formationGibbsKJPerMol(atService.ettringiteSaturationIndexWithoutIt, 20), 12);
+    expect(atService.ettringiteFormationGibbsKJPerMol).toBeCloseTo(formationGibbsKJPerMol(atService.ettringiteSaturationIndexWithoutIt!, 20), 12);
   });
 });
 
@@ -195,7 +195,27 @@ describe("the Monte Carlo path: the stability temperature by root finding from t
     // The reduced path solves the service and curing states only, and they agree with the full path's.
     expect(sample.value.sweep.points.map((p) => p.dose)).toEqual([20, 85]);
     expect(sample.value.summary.atCuring!.ettringiteMol).toBeCloseTo(reference.value.summary.atCuring!.ettringiteMol, 8);
-    expect(sample.value.summary.atService.ettringiteSaturationIndexWithoutIt).toBeCloseTo(reference.value.summary.atService.ettringiteSaturationIndexWithoutIt, 6);
+    expect(sample.value.summary.atService.ettringiteSaturationIndexWithoutIt).toBeCloseTo(reference.value.summary.atService.ettringiteSaturationIndexWithoutIt!, 6);
+  });
+
+  it("decides a sample's flag from the presence of ettringite where it is present, without the equilibrium without it (same decided bracket as from the computed indices)", () => {
+    const decisions = [60, 65];
+    const book60 = newWarmStartBook();
+    const full = temperatureHistory({ ...base, book: book60 }, exposure(), { points: 12, curingMaxTemperatureC: 60 });
+    if (!full.ok) throw new Error(JSON.stringify(full.error));
+    const sample = temperatureHistory({ ...base, book: readingBook(book60) }, exposure(), { points: 12, curingMaxTemperatureC: 60, reduced: true, decisionTemperaturesC: decisions });
+    if (!sample.ok) throw new Error(JSON.stringify(sample.error));
+    const s = sample.value.summary;
+    // Ettringite is present at 20 and 60 °C in this paste: the index without it is not computed there, and was positive on the full path.
+    for (const [state, reference] of [[s.atService, full.value.summary.atService], [s.atCuring!, full.value.summary.atCuring!]] as const) {
+      expect(state.ettringiteMol).toBeGreaterThan(0);
+      expect(state.ettringiteSaturationIndexWithoutIt).toBeNull();
+      expect(reference.ettringiteSaturationIndexWithoutIt!).toBeGreaterThan(0);
+    }
+    // The full path's limit lies above 65 °C, and the decided bracket says so.
+    expect(full.value.summary.stabilityLimit.kind).toBe("found");
+    if (full.value.summary.stabilityLimit.kind === "found") expect(full.value.summary.stabilityLimit.temperatureC).toBeGreaterThan(65);
+    expect(s.stabilityLimit).toEqual({ kind: "decided", bracketC: [65, 95] });
   });
 
   const pasteWithout = pasteAtTemperature(base, {}, ["ettringite"]);

@@ -1,7 +1,7 @@
 import curingLimits from "../../data/curing/curing-limits.json";
 import type { Flag, Severity } from "../flag";
 import type { ExposureInput } from "../../schema/exposure-input";
-import type { TemperatureHistoryResult } from "../../scenarios/temperature-history";
+import { ettringiteStableIn, type TemperatureHistoryResult, type TemperatureState } from "../../scenarios/temperature-history";
 
 /** The common specification limit on the maximum concrete temperature, °C, and the caution margin below it (`lib/data/curing/curing-limits.json`). */
 const SPECIFICATION_LIMIT_C = curingLimits.defPeakTemperatureC.value;
@@ -59,14 +59,18 @@ export function delayedEttringiteFormationFlag(
     "The thermodynamic data used are known to make ettringite too stable at high temperature (about 1.3 log10 units at 85 °C), so the computed stability temperature is likely too high; " +
     "published studies of Portland pastes place it near 65–75 °C (Lothenbach et al. 2007; Taylor, Famy & Scrivener 2001).";
   const atCuring = s.atCuring;
+  // The index without ettringite is not computed on a Monte Carlo sample's path where ettringite is present (positive then).
+  const indexText = (state: TemperatureState) =>
+    state.ettringiteSaturationIndexWithoutIt === null || state.ettringiteFormationGibbsKJPerMol === null
+      ? "a positive saturation index (ettringite is present)"
+      : `a saturation index of ${f2(state.ettringiteSaturationIndexWithoutIt)} (ΔrG ${f1(state.ettringiteFormationGibbsKJPerMol)} kJ/mol)`;
   const curingText = atCuring
-    ? `At ${f1(atCuring.temperatureC)} °C the formation reaction 6 Ca²⁺ + 2 Al(OH)4⁻ + 3 SO4²⁻ + 4 OH⁻ + 26 H2O → ettringite has a saturation index of ${f2(atCuring.ettringiteSaturationIndexWithoutIt)} ` +
-      `(ΔrG ${f1(atCuring.ettringiteFormationGibbsKJPerMol)} kJ/mol; ${atCuring.ettringiteSaturationIndexWithoutIt < 0 ? "ettringite dissolves" : "still just stable in the model"}), ` +
+    ? `At ${f1(atCuring.temperatureC)} °C the formation reaction 6 Ca²⁺ + 2 Al(OH)4⁻ + 3 SO4²⁻ + 4 OH⁻ + 26 H2O → ettringite has ${indexText(atCuring)}, ` +
+      `${ettringiteStableIn(atCuring) ? "so ettringite is still just stable in the model" : "so ettringite dissolves"}, ` +
       `and ${f1(atCuring.sulfate.outsideAftMolSO3PerM3)} mol SO3 per m³ of concrete is held outside ettringite (in AFm and the pore solution).`
     : "";
   const serviceText =
-    `At the service temperature of ${f1(s.atService.temperatureC)} °C the same reaction has a saturation index of ${f2(s.atService.ettringiteSaturationIndexWithoutIt)} ` +
-    `(ΔrG ${f1(s.atService.ettringiteFormationGibbsKJPerMol)} kJ/mol): that sulfate is driven back into ettringite` +
+    `At the service temperature of ${f1(s.atService.temperatureC)} °C the same reaction has ${indexText(s.atService)}: that sulfate is driven back into ettringite` +
     (s.sulfateToEttringiteOnCoolingMolSO3PerM3 !== null && s.ettringiteVolumeGainOnCoolingLitresPerM3 !== null
       ? `, about ${f1(s.sulfateToEttringiteOnCoolingMolSO3PerM3)} mol SO3 and ${f2(s.ettringiteVolumeGainOnCoolingLitresPerM3)} L of ettringite per m³, forming in the hardened paste.`
       : ".");

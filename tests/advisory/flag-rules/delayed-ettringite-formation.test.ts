@@ -103,6 +103,19 @@ describe("the flag from a Monte Carlo sample's decided limit", () => {
     expect(compared).toBeGreaterThan(500);
   });
 
+  it("reads a state whose index without ettringite was not computed (a sample, ettringite present) as stable, and says so in words", () => {
+    const s = real.summary;
+    const present = { ...s.atService, ettringiteMol: 0.01, ettringiteSaturationIndexWithoutIt: null, ettringiteFormationGibbsKJPerMol: null };
+    const atCuring = { ...s.atCuring!, temperatureC: 60, ettringiteMol: 0.008, ettringiteSaturationIndexWithoutIt: null, ettringiteFormationGibbsKJPerMol: null };
+    const decided = decidedStabilityLimit(defDecisionTemperaturesC(60), { fromC: 5, toC: 95 }, present, atCuring, () => -0.5);
+    expect(decided).toEqual({ kind: "decided", bracketC: [60, 65] });
+    const result = { ...real, summary: { ...s, atService: present, atCuring, stabilityLimit: decided!, ettringiteStabilityTemperatureC: null } };
+    const flag = delayedEttringiteFormationFlag(result, { exposure, curingMaxTemperatureC: 60, waterBinderRatio: 0.5 });
+    expect(flag?.severity).toBe("caution");
+    expect(flag?.explanation).toContain("a positive saturation index (ettringite is present)");
+    expect(flag?.explanation).not.toMatch(/null|NaN/);
+  });
+
   it("is left to root finding where the sides cannot be told: unstable at every decision temperature and at the service temperature", () => {
     const siAt = () => -1;
     const states = withLimit({ kind: "absent-throughout", fromC: 5, toC: 95 }, 60, siAt).summary;

@@ -95,10 +95,16 @@ async function monteCarloSamples(
   });
 }
 
+/** Options of the warm-up: `monteCarlo` also starts this thread's sample workers and runs the samples' path once. */
+export type WarmUpOptions = { monteCarlo?: boolean };
+
 /**
  * A pool worker's warm-up (`ComputationPool.warm`, at server start): one assessment of the demo loads the data set and
  * compiles the engine's code, which the first request would otherwise wait for (about 2–3 s on the service machines).
+ * With `monteCarlo` (the job pool, whose jobs are Monte Carlo runs), two ranges of samples of the demo follow, so that
+ * the sample worker has started and compiled the samples' path too.
  */
-export async function warmUp(): Promise<void> {
+export async function warmUp(options: WarmUpOptions = {}): Promise<void> {
   await runAssessment(culvertDemo);
+  if (options.monteCarlo) await runAssessment({ ...culvertDemo, options: { ...culvertDemo.options, monteCarlo: { samples: 2 * SAMPLES_PER_RANGE, seed: 1 } } });
 }

@@ -32,10 +32,10 @@ export type ComputationPool<T> = {
   stats(): PoolStats;
   /**
    * Starts the workers now, up to the pool's size, and has each load its module and run the module's `warmUp` export
-   * if it has one (a server calls this at start, so that the first request does not wait for it). Missing worker
-   * files are left for the first request to report.
+   * if it has one, with `options` (a server calls this at start, so that the first request does not wait for it).
+   * Missing worker files are left for the first request to report.
    */
-  warm(): void;
+  warm(options?: unknown): void;
   /** Cancels every queued and running request and terminates the workers; a later `run` starts new ones. */
   close(): Promise<void>;
 };
@@ -212,13 +212,13 @@ export function createComputationPool<T>(module: WorkerModule, options: Computat
         dispatch();
       });
     },
-    warm() {
+    warm(options) {
       while (slots.size < size) {
         const files = resolveWorkerFiles(module);
         if (!files.ok) return;
         const slot = startWorker(files.modulePath);
         slot.worker.unref();
-        slot.worker.postMessage({ warm: true });
+        slot.worker.postMessage({ warm: true, options });
       }
     },
     stats() {

@@ -30,14 +30,14 @@ function computation() {
 }
 
 /**
- * A pool worker's warm-up (`ComputationPool.warm`): load the module and run its `warmUp` export, if it has one, so
+ * A pool worker's warm-up (`ComputationPool.warm`): load the module and run its `warmUp(options)` export, if it has one, so
  * that the first request finds the code compiled. Nothing is answered; a failure here shows again, reported, at the
  * first request.
  */
-async function warmUp() {
+async function warmUp(options) {
   try {
     const warm = loadModule().warmUp;
-    if (typeof warm === "function") await warm();
+    if (typeof warm === "function") await warm(options);
   } catch {
     // reported by the first request
   }
@@ -52,11 +52,11 @@ async function runJob() {
 /**
  * A pool worker: computes each `{ id, raw }` it is sent, one at a time, and answers with the same messages
  * carrying the request's `id`. A failure (or an outcome that cannot cross threads) answers only that request.
- * `{ warm: true }` asks for the warm-up.
+ * `{ warm: true, options }` asks for the warm-up, with the options given to `warm`.
  */
 function servePool() {
-  parentPort.on("message", async ({ id, raw, warm }) => {
-    if (warm) return warmUp();
+  parentPort.on("message", async ({ id, raw, warm, options }) => {
+    if (warm) return warmUp(options);
     try {
       const outcome = await computation()(raw, { onProgress: (fraction) => post({ type: "progress", id, fraction }) });
       post({ type: "outcome", id, outcome });

@@ -21,9 +21,9 @@ export type FixtureResult = { tag: string; ran: string[]; threadId: number };
 
 const ran: string[] = [];
 
-/** The pool's warm-up (`ComputationPool.warm`): recorded like a request, as "warm-up". */
-export function warmUp() {
-  ran.push("warm-up");
+/** The pool's warm-up (`ComputationPool.warm`): recorded like a request, as "warm-up" (with its options as JSON when given). */
+export function warmUp(options?: unknown) {
+  ran.push(options === undefined ? "warm-up" : `warm-up ${JSON.stringify(options)}`);
 }
 
 /** Records the tag, reports that it started (progress 0), then does its action; answers with the tags this worker has run. */

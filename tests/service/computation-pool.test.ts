@@ -99,6 +99,12 @@ describe("the computation pool", () => {
     expect(first.ran).toEqual(["warm-up", "first"]);
   });
 
+  it("passes the warm-up's options to the module's warmUp export", async () => {
+    const { pool, run } = fixturePool(1);
+    pool.warm({ monteCarlo: true });
+    expect(valueOf(await run({ action: "busy", tag: "first", ms: 1 })).ran).toEqual(['warm-up {"monteCarlo":true}', "first"]);
+  });
+
   it("answers a request beyond maxQueued waiting ones at once as busy, and takes requests again once the queue drains", async () => {
     const { pool, run } = fixturePool(1, 1);
     const first = run({ action: "busy", tag: "first", ms: 300 });

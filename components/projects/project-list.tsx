@@ -2,6 +2,7 @@
 
 import { useCallback, useEffect, useState } from "react";
 import { apiRequest, exportLinks, type AssessmentSummary, type SavedAssessment } from "../api-client";
+import { dateTimeLabel } from "./date-label";
 
 const MIN_COMPARE = 2;
 const MAX_COMPARE = 4;
@@ -122,7 +123,7 @@ export function ProjectList() {
                   </th>
                   <td>{a.projectName ?? "–"}</td>
                   <td>
-                    <time dateTime={a.updatedAt}>{new Date(a.updatedAt).toLocaleString("en-GB")}</time>
+                    <time dateTime={a.updatedAt}>{dateTimeLabel(a.updatedAt)}</time>
                   </td>
                   <td>
                     {a.isCurrent ? (

@@ -7,9 +7,9 @@ import { domainError, type ServiceError, type ServiceOutcome } from "./outcome";
  * for progress, cancellable through an AbortSignal. Where the work runs is the runner's affair: the
  * assessment jobs use `poolJobRunner` (the long-lived workers of the job pool, `assess-jobs.ts`), tests may pass an
  * in-process runner or `workerJobRunner` (a worker thread per job). A job is "queued" until its runner reports
- * that it started (`onStart`; a runner that never does leaves it to the first progress report), then "running". The registry is kept in memory: a restart forgets the jobs (the page then starts
- * again). Finished jobs are kept for `retentionMs` and then dropped; at most `maxActive` run at once,
- * more → `busy` (503).
+ * that it started (`onStart`; a runner that never does leaves it to the first progress report), then "running".
+ * The registry is kept in memory: a restart forgets the jobs (the page then starts again). Finished jobs are kept
+ * for `retentionMs` and then dropped; at most `maxActive` are queued or running at once, more → `busy` (503).
  */
 export type JobState = "queued" | "running" | "succeeded" | "failed" | "cancelled";
 

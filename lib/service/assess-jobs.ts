@@ -1,7 +1,7 @@
 import { assessInput } from "../schema/assess-input";
 import { formatIssues } from "../schema/format-issues";
 import type { AssessmentResult } from "./assess";
-import { createComputationPool, poolSizeFrom, type ComputationPool, type PoolSizeError } from "./computation-pool";
+import { createComputationPool, poolSizeFrom, sizeOrDefault, type ComputationPool, type PoolSizeError } from "./computation-pool";
 import { createJobRegistry, poolJobRunner, type JobRegistry, type JobStatus } from "./jobs";
 import { validationError, type ServiceOutcome } from "./outcome";
 import { processWide } from "./process-wide";
@@ -27,11 +27,9 @@ export function jobWorkersFrom(text: string | undefined): { ok: true; value: num
  * set and the compiled engine between jobs: a 200-sample job took 11.2–11.8 s on a fresh worker per job and
  * 5.3 s on a warm pool worker (2026-12-02, this machine). A cancelled job's worker is terminated and replaced.
  */
-const jobPool = processWide("hydrastate.assessmentJobPool", () => {
-  const size = jobWorkersFrom(process.env[JOB_WORKERS_ENV]);
-  if (!size.ok) console.error(JSON.stringify({ level: "warn", ...size.error, using: DEFAULT_JOB_WORKERS }));
-  return createComputationPool<AssessmentResult>(assessmentWorkerModule, { size: size.ok ? size.value : DEFAULT_JOB_WORKERS });
-});
+const jobPool = processWide("hydrastate.assessmentJobPool", () =>
+  createComputationPool<AssessmentResult>(assessmentWorkerModule, { size: sizeOrDefault(jobWorkersFrom(process.env[JOB_WORKERS_ENV]), DEFAULT_JOB_WORKERS) }),
+);
 
 export function assessmentJobPool(): ComputationPool<AssessmentResult> {
   return jobPool.get();

@@ -1,6 +1,6 @@
 import type { AssessmentResult } from "./assess";
 import { assessmentWorkerModule } from "./assess-jobs";
-import { createComputationPool, poolSizeFrom, type ComputationPool, type PoolSizeError } from "./computation-pool";
+import { createComputationPool, poolSizeFrom, sizeOrDefault, type ComputationPool, type PoolSizeError } from "./computation-pool";
 import { processWide } from "./process-wide";
 
 /** The environment variable that sets the number of pool workers for `POST /api/v1/assess`. */
@@ -24,11 +24,9 @@ export function assessWorkersFrom(text: string | undefined): { ok: true; value: 
  * assessment jobs), on `globalThis` so that a reloaded route module finds the workers already started. An
  * invalid `HYDRASTATE_ASSESS_WORKERS` is reported in one log line and the default is used.
  */
-const pool = processWide("hydrastate.assessmentPool", () => {
-  const size = assessWorkersFrom(process.env[ASSESS_WORKERS_ENV]);
-  if (!size.ok) console.error(JSON.stringify({ level: "warn", ...size.error, using: DEFAULT_ASSESS_WORKERS }));
-  return createComputationPool<AssessmentResult>(assessmentWorkerModule, { size: size.ok ? size.value : DEFAULT_ASSESS_WORKERS, maxQueued: MAX_QUEUED_ASSESSMENTS });
-});
+const pool = processWide("hydrastate.assessmentPool", () =>
+  createComputationPool<AssessmentResult>(assessmentWorkerModule, { size: sizeOrDefault(assessWorkersFrom(process.env[ASSESS_WORKERS_ENV]), DEFAULT_ASSESS_WORKERS), maxQueued: MAX_QUEUED_ASSESSMENTS }),
+);
 
 export function assessmentPool(): ComputationPool<AssessmentResult> {
   return pool.get();

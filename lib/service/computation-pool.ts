@@ -68,6 +68,15 @@ export function poolSizeFrom<F extends string>(
   return { ok: false, error: { code: "invalid_pool_size", field, value: text, min: limits.min, max: limits.max } };
 }
 
+/**
+ * The size to start a pool with from a parsed environment variable (`poolSizeFrom`): an invalid value is reported in
+ * one log line naming the variable and its limits, and the default is used, so a typing error never stops the server.
+ */
+export function sizeOrDefault(parsed: { ok: true; value: number } | { ok: false; error: PoolSizeError }, defaultSize: number): number {
+  if (!parsed.ok) console.error(JSON.stringify({ level: "warn", ...parsed.error, using: defaultSize }));
+  return parsed.ok ? parsed.value : defaultSize;
+}
+
 type PoolMessage<T> =
   | { type: "progress"; id: number; fraction: number }
   | { type: "outcome"; id: number; outcome: ServiceOutcome<T> }

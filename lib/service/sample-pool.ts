@@ -1,6 +1,6 @@
 import { availableParallelism } from "node:os";
 import type { SampleRange, SampleValue } from "./assessment-samples";
-import { createComputationPool, poolSizeFrom, type ComputationPool, type PoolSizeError } from "./computation-pool";
+import { createComputationPool, poolSizeFrom, sizeOrDefault, type ComputationPool, type PoolSizeError } from "./computation-pool";
 import { domainError, type ServiceOutcome } from "./outcome";
 import { processWide } from "./process-wide";
 import type { WorkerModule } from "./worker-job-runner";
@@ -42,9 +42,7 @@ export type SamplePool = { size: number; pool?: ComputationPool<SampleValue[]> }
 
 /** One sample pool per thread; an invalid HYDRASTATE_SAMPLE_WORKERS is reported in one log line and the default is used. */
 const shared = processWide("hydrastate.samplePool", (): SamplePool => {
-  const size = sampleWorkersFrom(process.env[SAMPLE_WORKERS_ENV]);
-  if (!size.ok) console.error(JSON.stringify({ level: "warn", ...size.error, using: defaultSampleWorkers() }));
-  const workers = size.ok ? size.value : defaultSampleWorkers();
+  const workers = sizeOrDefault(sampleWorkersFrom(process.env[SAMPLE_WORKERS_ENV]), defaultSampleWorkers());
   return { size: workers, pool: workers > 0 ? createComputationPool<SampleValue[]>(sampleWorkerModule, { size: workers }) : undefined };
 });
 

@@ -9,7 +9,8 @@ import { carbonationDepassivationFlag } from "../advisory/flag-rules/carbonation
 import { gypsumFormationFlag } from "../advisory/flag-rules/gypsum-formation";
 import { lowAlkalinityReserveFlag } from "../advisory/flag-rules/low-alkalinity-reserve";
 import { magnesiumSulfateAttackFlag } from "../advisory/flag-rules/magnesium-sulfate-attack";
-import { severeSulfateExposure, sulfateAttackFlag } from "../advisory/flag-rules/sulfate-attack";
+import { sulfateAttackFlag } from "../advisory/flag-rules/sulfate-attack";
+import { severeSulfateExposure } from "../advisory/sulfate-exposure";
 import { adviseCuring, type CuringAdvice } from "../curing/advise-curing";
 import { describeFailure } from "../equilibrium/failure";
 import { carbonationScenario, type CarbonationScenario } from "../scenarios/carbonation";
@@ -166,7 +167,7 @@ export function assessWithDataset(input: AssessInput, binder: BinderSystem, data
     if (!sulfate.ok) scenarioErrors.sulfate = { code: sulfate.error.code, message: `at ${(sulfate.error.dose * 1000).toFixed(1)} mmol SO4 per 100 g binder: ${describeFailure(sulfate.error)}` };
     else {
       scenarios.sulfate = sulfate.value;
-      for (const flag of [sulfateAttackFlag(sulfate.value, context), gypsumFormationFlag(sulfate.value), magnesiumSulfateAttackFlag(sulfate.value)]) if (flag) flags.push(flag);
+      for (const flag of [sulfateAttackFlag(sulfate.value, context), gypsumFormationFlag(sulfate.value, context), magnesiumSulfateAttackFlag(sulfate.value, context)]) if (flag) flags.push(flag);
     }
   }
   const carbonation = carbonationScenario(base, exposure, { points, coverMm: input.project?.element?.coverMm });

@@ -51,7 +51,17 @@ describe("sulfate ingress", () => {
   it("forms brucite or M-S-H with magnesium sulfate and flags magnesium sulfate attack (Bonen & Cohen 1992, Cem. Concr. Res. 22, 169)", () => {
     const mg = scenario({ cement: highC3A }, exposure("Mg"));
     expect(mg.summary.magnesiumPhasesOnsetDoseMmolPer100g).not.toBeNull();
-    expect(magnesiumSulfateAttackFlag(mg)?.severity).toBe("warning");
+    expect(magnesiumSulfateAttackFlag(mg, { exposure: exposure("Mg") })?.severity).toBe("warning");
+  });
+
+  it("weighs the magnesium sulfate flag by the exposure class: caution in XA1/S1 (400 mg/L), information below XA1/S1 (50 mg/L; EN 206 Table 2, ACI 318-19 Table 19.3.1.1)", () => {
+    for (const [sulfateMgPerL, severity] of [[400, "caution"], [50, "info"]] as const) {
+      const mg = scenario({ cement: highC3A }, exposure("Mg", sulfateMgPerL));
+      expect(mg.summary.magnesiumPhasesOnsetDoseMmolPer100g).not.toBeNull();
+      const flag = magnesiumSulfateAttackFlag(mg, { exposure: exposure("Mg", sulfateMgPerL) });
+      expect(flag?.severity).toBe(severity);
+      if (severity === "info") expect(flag?.explanation).toContain("below the lowest sulfate classes");
+    }
   });
 
   it("does not flag sulfate attack without a sulfate exposure class (EN 206 Table 2: below 200 mg/L)", () => {

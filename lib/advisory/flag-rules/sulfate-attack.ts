@@ -1,21 +1,10 @@
-import { classifyAci318Sulfate } from "../aci318-classification";
-import { classifyEn206ChemicalAttack } from "../en206-classification";
 import type { Flag } from "../flag";
+import { severeSulfateExposure } from "../sulfate-exposure";
 import { advisoryThresholds } from "../thresholds";
 import type { ExposureInput } from "../../schema/exposure-input";
 import type { SulfateScenario } from "../../scenarios/sulfate-ingress";
 
 const t = advisoryThresholds.sulfateAttack;
-
-/** Severe sulfate exposure: EN 206 XA2/XA3 from sulfate, or ACI 318 S2/S3. */
-export function severeSulfateExposure(exposure: ExposureInput): { severe: boolean; any: boolean; label: string } {
-  const en = classifyEn206ChemicalAttack(exposure);
-  const aci = classifyAci318Sulfate(exposure).assignment.exposureClass;
-  const enClass = en.sulfateGoverns ? en.governingClass : undefined;
-  const severe = enClass === "XA2" || enClass === "XA3" || aci === "S2" || aci === "S3";
-  const any = severe || enClass === "XA1" || aci === "S1";
-  return { severe, any, label: [enClass && `EN 206 ${enClass}`, aci && aci !== "S0" && `ACI 318 ${aci}`].filter(Boolean).join(", ") || "no sulfate class" };
-}
 
 /**
  * `sulfate-attack`: the solids formed by sulfate taken up from the exposure (ettringite from AFm and

@@ -1,4 +1,5 @@
 import type { Flag, Severity } from "../flag";
+import { belowSulfateClassesSentence, severeSulfateExposure, severityForSulfateClass } from "../sulfate-exposure";
 import type { ExposureInput } from "../../schema/exposure-input";
 import type { ThaumasiteResult } from "../../scenarios/thaumasite";
 
@@ -30,6 +31,7 @@ function isWet(exposure: ExposureInput, sulfatePresent: boolean): boolean {
  *
  * - warning: thaumasite forms, wet exposure, exposure sulfate present, service minimum at or below 15 °C;
  * - caution: the same but warmer service (thaumasite attack is reported far less often above about 15 °C);
+ * - both weighed by the sulfate class (`severityForSulfateClass`): a caution at most in XA1/S1, information without a class;
  * - none: dry or sheltered exposure, no sulfate in the exposure, or no thaumasite at the service temperature.
  */
 export function thaumasiteFormationFlag(
@@ -40,7 +42,8 @@ export function thaumasiteFormationFlag(
   if (!s.exposureSulfatePresent) return undefined;
   if (!isWet(context.exposure, s.exposureSulfatePresent)) return undefined;
   if (!(s.atService.thaumasiteMol > 0)) return undefined;
-  const severity: Severity = s.serviceTemperatureC <= COLD_SERVICE_TEMPERATURE_C ? "warning" : "caution";
+  const sulfateClass = severeSulfateExposure(context.exposure);
+  const severity: Severity = severityForSulfateClass(s.serviceTemperatureC <= COLD_SERVICE_TEMPERATURE_C ? "warning" : "caution", sulfateClass);
 
   const carbonate = s.carbonateMolPer100gBinder;
   const sources = [
@@ -64,6 +67,7 @@ export function thaumasiteFormationFlag(
       `about ${f1(s.atService.thaumasiteLitresPerM3)} L of thaumasite per m³ of concrete forms, taking ${f1(s.atService.siliconInThaumasitePercent)} % of the paste's reacted silicon out of the C-S-H: the binder softens and loses strength.`,
     limitText,
     "The calculation is an equilibrium state of a surface zone saturated with sulfate; thaumasite forms slowly, over years, in cold and wet ground.",
+    sulfateClass.any ? "" : belowSulfateClassesSentence(context.exposure.sulfateMgPerL),
   ]
     .filter(Boolean)
     .join(" ");
@@ -71,7 +75,12 @@ export function thaumasiteFormationFlag(
   return {
     id: "thaumasite-formation",
     severity,
-    title: severity === "warning" ? "Thaumasite sulfate attack possible: cold, wet, sulfate and carbonate present" : "Thaumasite can form with this sulfate and carbonate",
+    title:
+      severity === "warning"
+        ? "Thaumasite sulfate attack possible: cold, wet, sulfate and carbonate present"
+        : sulfateClass.any
+          ? "Thaumasite can form with this sulfate and carbonate"
+          : "Thaumasite could form with much more sulfate than this exposure brings",
     explanation,
     basis:
       "Thaumasite Expert Group 1999, The thaumasite form of sulfate attack (DETR, London): sulfate, carbonate, mobile water and cold (most cases below about 15 °C) together; " +

@@ -66,6 +66,16 @@ describe("the thaumasite-formation flag (issue 5 acceptance)", () => {
     expect(thaumasiteFormationFlag(warmDry.result, { exposure: wet, waterBinderRatio: 0.5 })?.severity).toBe("caution");
   });
 
+  it("is a caution only in a mild sulfate class (400 mg/L: EN 206 XA1, ACI 318 S1) and information below the classes (50 mg/L), though the equilibrium holds thaumasite in both", () => {
+    const mild = flagFor({ sulfateMgPerL: 400, sulfateCation: "Na", serviceTemperatureC: 5, wetting: "permanently-wet" });
+    expect(mild.result.summary.atService.thaumasiteMol).toBeGreaterThan(0);
+    expect(mild.flag?.severity).toBe("caution");
+    const dilute = flagFor({ sulfateMgPerL: 50, sulfateCation: "Na", serviceTemperatureC: 5, wetting: "permanently-wet" });
+    expect(dilute.result.summary.atService.thaumasiteMol).toBeGreaterThan(0);
+    expect(dilute.flag?.severity).toBe("info");
+    expect(dilute.flag?.explanation).toContain("below the lowest sulfate classes (EN 206 Table 2 XA1 from 200 mg/L, ACI 318-19 Table 19.3.1.1 S1 from 150 ppm)");
+  });
+
   it("is not raised without a sulfate source in the exposure", () => {
     const { flag } = flagFor({ serviceTemperatureC: 5, wetting: "permanently-wet" });
     expect(flag).toBeUndefined();

@@ -5,7 +5,7 @@ import { FormProvider, useFieldArray, useForm, useFormContext, useWatch, type Re
 import { zodResolver } from "@hookform/resolvers/zod";
 import { assessInput, type AssessInput, type AssessInputRaw } from "../../lib/schema/assess-input";
 import { culvertDemo, DEMO_LABEL } from "../../lib/demo/culvert-demo";
-import { CheckboxField, ModeRadios, NumberField, SelectField, TextField } from "./fields";
+import { CheckboxField, GroupError, ModeRadios, NumberField, SelectField, TextField } from "./fields";
 import { OxideFields } from "./oxide-fields";
 import { AmbientSeriesFields } from "./ambient-series-fields";
 import { ServiceTemperatureFields, serviceTemperatureModeOf, type ServiceTemperatureMode } from "./service-temperature-fields";
@@ -13,7 +13,7 @@ import { StrengthTargetFields } from "./strength-target-fields";
 import { HeatCurveFields } from "./heat-curve-fields";
 import { LimitOverrideFields } from "./limit-override-fields";
 import { ErrorSummary } from "./error-summary";
-import { flattenFormErrors, withoutUnionMessageBesideBounds } from "./form-errors";
+import { fieldId, flattenFormErrors, withoutUnionMessageBesideBounds } from "./form-errors";
 import { cementPhasesForThermalModel, prepareAssessInput } from "./prepare-input";
 import { newAssessmentDefaults } from "./default-values";
 import {
@@ -200,7 +200,7 @@ function BinderSection() {
         ]}
       />
       {kind === "preset" ? (
-        <SelectField name="binder.cement.presetId" label="Cement type" choices={cementPresetChoices} hint="Typical compositions from lib/data/binders/cement-presets.json; replace with your certificate." />
+        <SelectField name="binder.cement.presetId" label="Cement type" choices={cementPresetChoices} hint="Typical compositions from lib/data/binders/cement-presets.json; the blended types (CEM II–V, ASTM C595) include their own supplementary materials. Replace with your certificate." />
       ) : null}
       {kind === "oxides" ? <OxideFields prefix="binder.cement.oxidesMassPercent" /> : null}
       {kind === "phases" ? (
@@ -215,8 +215,9 @@ function BinderSection() {
       ) : null}
       <NumberField name="binder.cement.blaineM2PerKg" label="Blaine fineness" unit="m²/kg" hint="200–800 m²/kg; empty takes the preset's or the model's default." />
 
-      <fieldset className="subsection">
+      <fieldset className="subsection" id={fieldId("binder.supplementaryMaterials")} tabIndex={-1}>
         <legend>Supplementary materials</legend>
+        <GroupError name="binder.supplementaryMaterials" />
         {fields.length === 0 ? <p className="hint">None. Add slag, fly ash, silica fume, metakaolin, limestone or a natural pozzolan.</p> : null}
         {fields.map((field, index) => (
           <ScmEntry key={field.id} index={index} onRemove={() => remove(index)} />

@@ -51,6 +51,23 @@ const describedBy = (hint: unknown, error: unknown, hintId: string, errorId: str
   [hint ? hintId : null, error ? errorId : null].filter(Boolean).join(" ") || undefined;
 
 /** A number input with its unit beside it, a hint (default and source) and the schema's message. */
+/**
+ * The error of a group of fields (an array such as the supplementary materials, or a rule across its entries), shown
+ * inside the group. react-hook-form keeps it at the group's path or at `root` under it.
+ */
+export function GroupError({ name }: { name: string }) {
+  const { formState } = useFormContext();
+  const node = get(formState.errors, name) as { message?: string; root?: { message?: string } } | undefined;
+  const message = node?.message ?? node?.root?.message;
+  if (!message) return null;
+  return (
+    <p className="field-error" id={`${fieldId(name)}-error`} data-for={fieldId(name)}>
+      <span aria-hidden="true">⚠ </span>
+      {message}
+    </p>
+  );
+}
+
 export function NumberField({ name, label, unit, hint, required, step = "any", options }: FieldProps & { step?: string; options?: RegisterOptions<FieldValues, string> }) {
   const { register } = useFormContext();
   const { id, hintId, errorId, error } = useFieldState(name);

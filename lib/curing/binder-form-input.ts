@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { binderSystemFromInput } from "../cement/binder-system";
+import { binderSystemIssue } from "../cement/binder-system-issue";
 import { clinkerPhase, type ClinkerPhaseId } from "../cement/clinker-phases";
 import { partitionCementOxides } from "../cement/clinker-partition";
 import { oxideMolarMassGPerMol } from "../cement/oxides";
@@ -117,8 +118,8 @@ export function curingInputFromBinderForm(raw: Record<string, unknown>): { ok: t
       const field = curingField(issue.path);
       return fail(field, issue.message.startsWith(field) ? issue.message : `${field}: ${issue.message}`);
     }
-    if (error.code === "clinker_phase_negative") return fail("binder.cement", `the cement analysis gives a negative ${error.phase} (${error.massG.toFixed(2)} g per 100 g)`);
-    return fail("binder.supplementaryMaterials", `binder: ${error.code}`);
+    const issue = binderSystemIssue(error);
+    return fail(`binder.${issue.path}`, issue.message);
   }
   const binder = system.value.binder;
   const phases = curingCementPhases(binder);

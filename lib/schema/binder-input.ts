@@ -156,6 +156,23 @@ export const ageInputSchema = z.discriminatedUnion(
   { error: "age.mode must be one of degrees, age" },
 );
 
+type CementPreset = (typeof cementPresets.presets)[number];
+
+/** The cement preset with this id when it is a blended cement (it carries its own supplementary materials). */
+function blendedCementPreset(presetId: string): CementPreset | undefined {
+  const preset = cementPresets.presets.find((entry) => entry.id === presetId);
+  return preset && preset.supplementaryMaterials.length > 0 ? preset : undefined;
+}
+
+/** Why a blended cement preset takes no further supplementary materials, and what to do instead. */
+export function blendedPresetMessage(preset: Pick<CementPreset, "name" | "standard" | "supplementaryMaterials">): string {
+  const own = preset.supplementaryMaterials.map((scm) => `${scm.type} ${scm.massPercentOfBinder} %`).join(", ");
+  return (
+    `supplementaryMaterials must be empty with the blended cement ${preset.name} (${preset.standard}), which already contains ${own} of the binder; ` +
+    "to add your own, choose a Portland cement type (CEM I or ASTM C150) or give the cement's oxide analysis"
+  );
+}
+
 export const binderInputSchema = z
   .object(
     {
@@ -167,6 +184,10 @@ export const binderInputSchema = z
     { error: "input must be an object with cement, mix and age" },
   )
   .superRefine((input, context) => {
+    const blendedPreset = input.cement.kind === "preset" ? blendedCementPreset(input.cement.presetId) : undefined;
+    if (blendedPreset && input.supplementaryMaterials.length > 0) {
+      context.addIssue({ code: "custom", path: ["supplementaryMaterials"], message: blendedPresetMessage(blendedPreset) });
+    }
     const totalScm = input.supplementaryMaterials.reduce((sum, scm) => sum + scm.massPercentOfBinder, 0);
     if (totalScm > 95) {
       context.addIssue({ code: "custom", path: ["supplementaryMaterials"], message: `supplementaryMaterials: massPercentOfBinder must sum to at most 95 (got ${totalScm})` });

@@ -13,6 +13,7 @@ import { sulfateAttackFlag } from "../advisory/flag-rules/sulfate-attack";
 import { severeSulfateExposure } from "../advisory/sulfate-exposure";
 import { adviseCuring, type CuringAdvice } from "../curing/advise-curing";
 import { describeFailure } from "../equilibrium/failure";
+import { binderSystemIssue } from "../cement/binder-system-issue";
 import { carbonationScenario, type CarbonationScenario } from "../scenarios/carbonation";
 import { chlorideBinding, exposureChlorideMgPerL, type ChlorideBindingScenario } from "../scenarios/chloride-binding";
 import { dryingScenario, type DryingScenario } from "../scenarios/drying";
@@ -113,8 +114,8 @@ export function binderSystemOf(input: AssessInput): ServiceOutcome<BinderSystem>
   const system = binderSystemFromInput(binderInputOf(input));
   if (system.ok) return system;
   const error = system.error;
-  if (error.code === "invalid_input") return validationError(error.issues.map((i) => ({ ...i, path: i.path.startsWith("cement") || i.path.startsWith("supplementaryMaterials") ? `binder.${i.path}` : i.path })));
-  return domainError(error.code, JSON.stringify(error));
+  const issues = error.code === "invalid_input" ? error.issues : [binderSystemIssue(error)];
+  return validationError(issues.map((i) => ({ ...i, path: i.path.startsWith("cement") || i.path.startsWith("supplementaryMaterials") ? `binder.${i.path}` : i.path })));
 }
 
 /** Everything for one data set: the base assemblage, the scenarios and their flags. */

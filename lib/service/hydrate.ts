@@ -5,6 +5,7 @@ import { describeFailure } from "../equilibrium/failure";
 import { phaseIds } from "../equilibrium/equilibrate";
 import { loadDataset } from "../data/load-dataset";
 import { hydrateInput, type HydrateInput } from "../schema/hydrate-input";
+import { binderSystemIssue } from "../cement/binder-system-issue";
 import { formatIssues } from "../schema/format-issues";
 import { domainError, validationError, type ServiceOutcome } from "./outcome";
 import type { BulkCompositionWarning } from "../cement/bulk-composition";
@@ -56,8 +57,7 @@ export function runHydrate(raw: unknown): ServiceOutcome<HydrateOutput> {
   const system = binderSystemFromInput({ cement: input.cement, supplementaryMaterials: input.supplementaryMaterials, mix: input.mix, age: input.age });
   if (!system.ok) {
     const error = system.error;
-    if (error.code === "invalid_input") return validationError(error.issues);
-    return domainError(error.code, JSON.stringify(error));
+    return validationError(error.code === "invalid_input" ? error.issues : [binderSystemIssue(error)]);
   }
   const temperatureC = input.age.mode === "age" ? input.age.curingTemperatureC : (input.temperatureC ?? DEFAULT_TEMPERATURE_C);
   const overrides = { suppress: input.suppressedPhases, enable: input.allowedPhases, dataset: dataset.value };

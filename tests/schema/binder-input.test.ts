@@ -70,6 +70,22 @@ describe("binder input schema", () => {
     expect(paths).toEqual(expect.arrayContaining(["supplementaryMaterials", "supplementaryMaterials.1.type"]));
   });
 
+  it("rejects further supplementary materials with a blended cement preset, naming what the preset holds and what to choose instead (EN 197-1 CEM III/A: 36-65 % slag)", () => {
+    const issues = issuesOf({
+      ...valid,
+      cement: { kind: "preset", presetId: "en197-cem-iii-a" },
+      supplementaryMaterials: [{ type: "siliceous-fly-ash", massPercentOfBinder: 10, composition: { kind: "preset", presetId: "siliceous-fly-ash-typical" } }],
+    });
+    expect(issues).toEqual([
+      {
+        path: "supplementaryMaterials",
+        message:
+          "supplementaryMaterials must be empty with the blended cement CEM III/A 42.5 N (EN 197-1), which already contains slag 50 % of the binder; to add your own, choose a Portland cement type (CEM I or ASTM C150) or give the cement's oxide analysis",
+      },
+    ]);
+    expect(issuesOf({ ...valid, cement: { kind: "preset", presetId: "en197-cem-iii-a" } })).toEqual([]);
+  });
+
   it("requires reactiveFraction with an oxide analysis of a supplementary material", () => {
     const issues = issuesOf({
       ...valid,

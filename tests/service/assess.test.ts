@@ -31,6 +31,23 @@ describe("runAssessment", () => {
     if (!r.ok && r.error.kind === "validation") expect(r.error.issues[0].path).toBe("mix.waterBinderRatio");
   });
 
+  it("tells a binder the model cannot build as a field error in words, not as a dump of the internal error", async () => {
+    const blended = await runAssessment({
+      ...input,
+      binder: { cement: { kind: "preset", presetId: "en197-cem-iii-a" }, supplementaryMaterials: [{ type: "limestone", massPercentOfBinder: 10, composition: { kind: "preset", presetId: "limestone-typical" } }] },
+    });
+    const slagAsCement = await runAssessment({ ...input, binder: { cement: { kind: "oxides", oxidesMassPercent: { CaO: 42, SiO2: 35, Al2O3: 11, Fe2O3: 0.5, MgO: 8, SO3: 1 } } } });
+    for (const [r, path] of [[blended, "binder.supplementaryMaterials"], [slagAsCement, "binder.cement.oxidesMassPercent"]] as const) {
+      expect(r.ok).toBe(false);
+      if (r.ok) continue;
+      expect(r.error.kind).toBe("validation");
+      if (r.error.kind !== "validation") continue;
+      expect(r.error.issues).toHaveLength(1);
+      expect(r.error.issues[0].path).toBe(path);
+      expect(r.error.issues[0].message).not.toMatch(/[{}"]/);
+    }
+  });
+
   it("gives identical Monte Carlo results for the same seed", async () => {
     const mc = { ...input, options: { sweepPoints: 8, monteCarlo: { samples: 10, seed: 7 } } };
     const [a, b] = await Promise.all([runAssessment(mc), runAssessment(mc)]);

@@ -95,6 +95,22 @@ describe("assessment form validation", () => {
     expect((screen.getByLabelText(/^Sea water/) as HTMLSelectElement).value).toBe("yes");
   });
 
+  it("says inside the supplementary-materials group, and in the summary linked to it, that a blended cement type takes no further materials", async () => {
+    const onSubmit = vi.fn();
+    const blended = { ...culvertDemo, binder: { ...culvertDemo.binder, cement: { kind: "preset" as const, presetId: "en197-cem-iii-a" } } };
+    render(<AssessmentForm onSubmit={onSubmit} initialValues={blended} />);
+    fireEvent.click(screen.getByRole("button", { name: /run the assessment/i }));
+    const summary = await screen.findByRole("alert");
+    const message = /^supplementaryMaterials must be empty with the blended cement CEM III\/A 42\.5 N \(EN 197-1\), which already contains slag 50 %/;
+    const link = within(summary).getByText(message) as HTMLAnchorElement;
+    const group = document.getElementById(link.getAttribute("href")!.slice(1))!;
+    expect(group.tagName).toBe("FIELDSET");
+    expect(within(group).getByText(message)).toBeTruthy();
+    fireEvent.click(link);
+    expect(document.activeElement).toBe(group);
+    expect(onSubmit).not.toHaveBeenCalled();
+  });
+
   it("groups the sections in fieldsets with legends in the order an engineer fills them", () => {
     render(<AssessmentForm onSubmit={vi.fn()} />);
     const legends = Array.from(document.querySelectorAll("fieldset.section > legend")).map((l) => l.textContent);

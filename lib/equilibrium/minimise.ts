@@ -120,7 +120,18 @@ export function minimise(p: EquilibriumProblem, options: MinimiseOptions = {}): 
   // Last, let solids related by water alone coexist with the solution (gypsum + anhydrite in a brine).
   // Not tried earlier: in hydrated cement the AFm hydrates make such pairs near-degenerate.
   const withWaterPairs = run(p, cloneState(start.value), newtonOptions, options, deadline, started, limitMs, true);
-  return withWaterPairs.ok ? { ok: true, value: { ...withWaterPairs.value, warmStarted: false } } : cold;
+  if (withWaterPairs.ok) return { ok: true, value: { ...withWaterPairs.value, warmStarted: false } };
+  // Last, the LP's phase set without the gas phase. The LP puts a gas of one species at a time beside the solution; in
+  // a very dilute, cold system (a paste in thousands of times its mass of water, near 0 °C) that gas and the solids
+  // made Newton's matrix singular and the amounts ran to ±1e9 mol. Left out, the gas enters by its saturation index
+  // if it belongs to the minimum. Tried last so that no system solved before takes another path.
+  const gas = p.phases.findIndex((phase) => phase.kind === "gas");
+  if (gas < 0 || !start.value.active[gas]) return cold;
+  const withoutGas = cloneState(start.value);
+  withoutGas.active[gas] = 0;
+  withoutGas.amount[gas] = 0;
+  const gasFree = run(p, withoutGas, newtonOptions, options, deadline, started, limitMs);
+  return gasFree.ok ? { ok: true, value: { ...gasFree.value, warmStarted: false } } : cold;
 }
 
 function compatible(p: EquilibriumProblem, s: SolverState): boolean {

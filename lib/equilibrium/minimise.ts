@@ -117,21 +117,26 @@ export function minimise(p: EquilibriumProblem, options: MinimiseOptions = {}): 
   });
   const retry = run(p, solutionOnly, newtonOptions, options, deadline, started, limitMs);
   if (retry.ok) return { ok: true, value: { ...retry.value, warmStarted: false } };
-  // Last, let solids related by water alone coexist with the solution (gypsum + anhydrite in a brine).
+  // Then let solids related by water alone coexist with the solution (gypsum + anhydrite in a brine).
   // Not tried earlier: in hydrated cement the AFm hydrates make such pairs near-degenerate.
   const withWaterPairs = run(p, cloneState(start.value), newtonOptions, options, deadline, started, limitMs, true);
   if (withWaterPairs.ok) return { ok: true, value: { ...withWaterPairs.value, warmStarted: false } };
-  // Last, the LP's phase set without the gas phase. The LP puts a gas of one species at a time beside the solution; in
-  // a very dilute, cold system (a paste in thousands of times its mass of water, near 0 °C) that gas and the solids
-  // made Newton's matrix singular and the amounts ran to ±1e9 mol. Left out, the gas enters by its saturation index
-  // if it belongs to the minimum. Tried last so that no system solved before takes another path.
-  const gas = p.phases.findIndex((phase) => phase.kind === "gas");
-  if (gas < 0 || !start.value.active[gas]) return cold;
-  const withoutGas = cloneState(start.value);
-  withoutGas.active[gas] = 0;
-  withoutGas.amount[gas] = 0;
-  const gasFree = run(p, withoutGas, newtonOptions, options, deadline, started, limitMs);
-  return gasFree.ok ? { ok: true, value: { ...gasFree.value, warmStarted: false } } : cold;
+  // Last, the LP's phase set less one phase at a time, the gas first. The LP's set can be singular for Newton from the
+  // start (a gas of one species beside the solution and the solids in a paste diluted in thousands of times its mass of
+  // water near 0 °C; nine solids of a sulfate- and carbonate-dosed paste at 0–15 °C, amounts running to ±1e6 mol), and
+  // then no addition is there to undo. Without one of its phases the set usually converges, and the phase search adds
+  // back what belongs to the minimum. Tried last so that no system solved before takes another path.
+  const lpPhases = p.phases.map((phase, k) => ({ phase, k })).filter(({ phase, k }) => start.value.active[k] && phase.kind !== "aqueous" && phase.kind !== "reservoir");
+  lpPhases.sort((a, b) => Number(b.phase.kind === "gas") - Number(a.phase.kind === "gas") || a.k - b.k);
+  for (const { k } of lpPhases) {
+    const without = cloneState(start.value);
+    without.active[k] = 0;
+    without.amount[k] = 0;
+    const reduced = run(p, without, newtonOptions, options, deadline, started, limitMs);
+    if (reduced.ok) return { ok: true, value: { ...reduced.value, warmStarted: false } };
+    if (reduced.error.code === "time_limit") return reduced;
+  }
+  return cold;
 }
 
 function compatible(p: EquilibriumProblem, s: SolverState): boolean {

@@ -109,6 +109,8 @@ export type TemperatureHistoryResult = {
   sweep: ScenarioSweep<TemperaturePoint>;
   summary: {
     serviceTemperatureC: number;
+    /** Set when the service temperature lies outside the data set's 0–100 °C and was evaluated at its limit. */
+    serviceTemperatureClampedFromC: number | null;
     /** Null when no curing temperature was given. */
     curingTemperatureC: number | null;
     /** The temperature above which ettringite is no longer stable in this mix (null unless a limit was found). */
@@ -173,9 +175,16 @@ export function formationGibbsKJPerMol(saturationIndex: number, temperatureC: nu
 }
 
 /** Representative service temperature for DEF: the mid-point of the range, or the base temperature. */
-function serviceTemperatureForDef(base: ScenarioBase, exposure: ExposureInput): number {
+/**
+ * The service temperature of the DEF comparison: the mean of the service range (or the single value), evaluated within
+ * the data set's 0–100 °C. A colder service (the schema takes down to −60 °C) is computed at 0 °C and said so: ettringite
+ * only gains stability on cooling, so 0 °C is the conservative side for the sulfate that reforms it.
+ */
+function serviceTemperatureForDef(base: ScenarioBase, exposure: ExposureInput): { temperatureC: number; clampedFromC: number | null } {
   const range = serviceTemperatureRangeC(exposure);
-  return range ? (range.minC + range.maxC) / 2 : base.temperatureC;
+  const wanted = range ? (range.minC + range.maxC) / 2 : base.temperatureC;
+  const temperatureC = Math.min(Math.max(wanted, DATA_SET_MIN_C), DATA_SET_MAX_C);
+  return { temperatureC, clampedFromC: temperatureC !== wanted ? wanted : null };
 }
 
 /**
@@ -599,7 +608,8 @@ export function temperatureHistory(
   exposure: ExposureInput,
   options: TemperatureHistoryOptions,
 ): { ok: true; value: TemperatureHistoryResult } | { ok: false; error: TemperatureHistoryError } {
-  const serviceC = serviceTemperatureForDef(base, exposure);
+  const service = serviceTemperatureForDef(base, exposure);
+  const serviceC = service.temperatureC;
   const curingC = options.curingMaxTemperatureC;
   const fromC = options.sweepFromC ?? DEFAULT_SWEEP_FROM_C;
   const toC = options.sweepToC ?? DEFAULT_SWEEP_TO_C;
@@ -701,6 +711,7 @@ export function temperatureHistory(
       sweep: { id: "temperature", title: "Assemblage against temperature", doseLabel: "Temperature", doseUnit: "°C", points: chartPoints },
       summary: {
         serviceTemperatureC: serviceC,
+        serviceTemperatureClampedFromC: service.clampedFromC,
         curingTemperatureC: curingC ?? null,
         ettringiteStabilityTemperatureC: stabilityLimit.kind === "found" ? stabilityLimit.temperatureC : null,
         stabilityLimit,

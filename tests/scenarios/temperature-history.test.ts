@@ -4,6 +4,7 @@ import { hydratePaste } from "../../lib/cement/hydrate-paste";
 import { loadDataset } from "../../lib/data/load-dataset";
 import { parseExposureInput } from "../../lib/schema/exposure-input";
 import { brentRoot, DEFAULT_MAX_ITERATIONS, DEFAULT_TOLERANCE_C, formationGibbsKJPerMol, pasteAtTemperature, stabilityLimitNear, temperatureHistory } from "../../lib/scenarios/temperature-history";
+import { delayedEttringiteFormationFlag } from "../../lib/advisory/flag-rules/delayed-ettringite-formation";
 import { newWarmStartBook, phaseMoles, readingBook, type ScenarioBase } from "../../lib/scenarios/sweep";
 
 /** The base paste of the scenario brief: typical CEM I preset, w/b 0.5, 350 kg/m³, 28 days at 20 °C (typical, not a specific cement). */
@@ -159,6 +160,20 @@ describe("the comparison of curing (85 °C) and service (20 °C)", () => {
     // ΔrG = −RT ln10 · SI: at 25 °C one log10 unit is 5.708 kJ/mol (R = 8.314462618 J/(mol K), CODATA 2018).
     expect(formationGibbsKJPerMol(1, 25)).toBeCloseTo(-5.708, 3);
     expect(atService.ettringiteFormationGibbsKJPerMol).toBeCloseTo(formationGibbsKJPerMol(atService.ettringiteSaturationIndexWithoutIt!, 20), 12);
+  });
+});
+
+describe("a service temperature below the data set's 0 °C", () => {
+  it("is evaluated at 0 °C and said so, instead of failing the scenario (the schema takes service temperatures down to −60 °C)", () => {
+    const r = temperatureHistory(base, exposure({ serviceTemperatureC: -5 }), { points: 4, curingMaxTemperatureC: 85 });
+    if (!r.ok) throw new Error(JSON.stringify(r.error));
+    expect(r.value.summary.serviceTemperatureC).toBe(0);
+    expect(r.value.summary.serviceTemperatureClampedFromC).toBe(-5);
+    expect(r.value.summary.atService.temperatureC).toBe(0);
+    expect(result.summary.serviceTemperatureClampedFromC).toBeNull();
+    const cold = exposure({ serviceTemperatureC: -5 });
+    const flag = delayedEttringiteFormationFlag(r.value, { exposure: cold, curingMaxTemperatureC: 85, waterBinderRatio: 0.5 });
+    expect(flag?.explanation).toContain("At the service temperature of 0.0 °C (the data set's limit; the service temperature entered is -5.0 °C)");
   });
 });
 

@@ -70,7 +70,7 @@ export function delayedEttringiteFormationFlag(
       `and ${f1(atCuring.sulfate.outsideAftMolSO3PerM3)} mol SO3 per m³ of concrete is held outside ettringite (in AFm and the pore solution).`
     : "";
   const serviceText =
-    `At the service temperature of ${f1(s.atService.temperatureC)} °C the same reaction has ${indexText(s.atService)}: that sulfate is driven back into ettringite` +
+    `At the service temperature of ${f1(s.atService.temperatureC)} °C${s.serviceTemperatureClampedFromC != null ? ` (the data set's limit; the service temperature entered is ${f1(s.serviceTemperatureClampedFromC)} °C)` : ""} the same reaction has ${indexText(s.atService)}: that sulfate is driven back into ettringite` +
     (s.sulfateToEttringiteOnCoolingMolSO3PerM3 !== null && s.ettringiteVolumeGainOnCoolingLitresPerM3 !== null
       ? `, about ${f1(s.sulfateToEttringiteOnCoolingMolSO3PerM3)} mol SO3 and ${f2(s.ettringiteVolumeGainOnCoolingLitresPerM3)} L of ettringite per m³, forming in the hardened paste.`
       : ".");

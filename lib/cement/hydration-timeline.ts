@@ -18,9 +18,20 @@ export type TimelineEntry = {
 };
 
 /**
+ * Ages of the timeline the engine could not solve (warm and cold), left out of the entries. A timeline is a chart of
+ * the assessment, not its result: one hard age (a self-desiccating low-w/b paste whose last drops of pore water meet
+ * nine solids) must not sink the assessment, so it is told, not fatal.
+ */
+export type TimelineWarning = HydrationWarning | { code: "timeline_ages_unsolved"; ageDays: number[]; reason: EquilibriumFailure["code"]; message: string };
+
+/** Failures of one age that another age need not share; the rest (bad input, infeasible composition) end the timeline. */
+const SKIPPABLE_FAILURES: ReadonlySet<EquilibriumFailure["code"]> = new Set(["no_convergence", "time_limit"]);
+
+/**
  * The assemblage against age on a logarithmic axis at one curing temperature: reaction degrees from the
  * binder model at each age, each equilibrium warm-started from the previous age (the compositions change
- * smoothly, so most points need one or two Newton iterations).
+ * smoothly, so most points need one or two Newton iterations). Ages the engine cannot solve are left out and
+ * reported (`timeline_ages_unsolved`); the timeline fails only when no age is solved.
  */
 export function hydrationTimeline(
   binder: ResolvedBinder,
@@ -32,14 +43,17 @@ export function hydrationTimeline(
     suppress?: readonly string[];
     enable?: readonly string[];
     dataset?: Dataset;
+    /** Time limit of each age's equilibrium, ms (the engine's default when absent). */
+    timeLimitMs?: number;
   },
-): { ok: true; value: { entries: TimelineEntry[]; warnings: HydrationWarning[] } } | { ok: false; error: EquilibriumFailure & { ageDays?: number } } {
+): { ok: true; value: { entries: TimelineEntry[]; warnings: TimelineWarning[] } } | { ok: false; error: EquilibriumFailure & { ageDays?: number } } {
   const ages = logarithmicAgesDays(options.firstAgeDays, options.lastAgeDays, options.points);
   const compositions = binderTimeline(binder, ages, options.temperatureC);
   if (!compositions.ok)
     return { ok: false, error: { code: "infeasible_composition", message: `the cement analysis gives a negative ${compositions.error.phase} (${compositions.error.massG.toFixed(2)} g per 100 g)` } };
   const entries: TimelineEntry[] = [];
   const warnings = new Map<string, HydrationWarning>();
+  const unsolved: { ageDays: number; error: EquilibriumFailure }[] = [];
   let warmStart: SerializedState | undefined;
   let alkaliBoundFraction: Record<string, number> | undefined;
   // The bound-alkali fractions of the last two ages, to extrapolate the next age's starting guess linearly in
@@ -62,8 +76,13 @@ export function hydrationTimeline(
       warmStart,
       alkaliBoundFraction,
       dataset: options.dataset,
+      timeLimitMs: options.timeLimitMs,
     });
-    if (!paste.ok) return { ok: false, error: { ...paste.error, ageDays: point.ageDays } };
+    if (!paste.ok) {
+      if (!SKIPPABLE_FAILURES.has(paste.error.code)) return { ok: false, error: { ...paste.error, ageDays: point.ageDays } };
+      unsolved.push({ ageDays: point.ageDays, error: paste.error });
+      continue;
+    }
     warmStart = paste.value.assemblage.state;
     const reacted = point.composition.reactedElementsMol;
     alkaliBoundFraction = Object.fromEntries(Object.entries(paste.value.alkaliInCshMol).map(([e, mol]) => [e, reacted[e as "Na" | "K"] > 0 ? mol / reacted[e as "Na" | "K"] : 0]));
@@ -79,5 +98,16 @@ export function hydrationTimeline(
       pH: paste.value.poreSolution?.pH ?? null,
     });
   }
-  return { ok: true, value: { entries, warnings: [...warnings.values()] } };
+  if (entries.length === 0 && unsolved.length > 0) return { ok: false, error: { ...unsolved[0].error, ageDays: unsolved[0].ageDays } };
+  const told: TimelineWarning[] = [...warnings.values()];
+  if (unsolved.length > 0) {
+    const ages = unsolved.map((u) => u.ageDays);
+    told.push({
+      code: "timeline_ages_unsolved",
+      ageDays: ages,
+      reason: unsolved[0].error.code,
+      message: `the engine could not solve the assemblage at ${ages.length === 1 ? "age" : "ages"} ${ages.map((a) => `${Number(a.toPrecision(3))} d`).join(", ")} (${unsolved[0].error.message}); the timeline leaves ${ages.length === 1 ? "it" : "them"} out`,
+    });
+  }
+  return { ok: true, value: { entries, warnings: told } };
 }

@@ -1,6 +1,6 @@
 import { binderSystemFromInput, type BinderSystem } from "../cement/binder-system";
 import { hydratePaste, type HydratedPaste } from "../cement/hydrate-paste";
-import { hydrationTimeline, type TimelineEntry } from "../cement/hydration-timeline";
+import { hydrationTimeline, type TimelineEntry, type TimelineWarning } from "../cement/hydration-timeline";
 import { classifyExposure, type ExposureClassification } from "../advisory/exposure-classes";
 import { checkCompliance, type ComplianceResult } from "../advisory/exposure-compliance";
 import { mixForCompliance } from "../advisory/mix-for-compliance";
@@ -130,10 +130,13 @@ export function assessWithDataset(input: AssessInput, binder: BinderSystem, data
   if (!paste.ok) return domainError(paste.error.code, describeFailure(paste.error));
   recordPaste(book, "base", temperatureC, paste.value);
   let timeline: TimelineEntry[] = [];
+  const timelineWarnings: TimelineWarning[] = [];
   if (withTimeline) {
     const series = hydrationTimeline(system.value.binder, { temperatureC, points, firstAgeDays: 1 / 24, lastAgeDays: 3650, ...overrides });
     if (!series.ok) return domainError(series.error.code, describeFailure(series.error));
     timeline = series.value.entries;
+    // The paste's own warnings are those of the assessment's age; the timeline adds only what is new.
+    timelineWarnings.push(...series.value.warnings.filter((w) => !paste.value.warnings.some((x) => x.code === w.code)));
   }
   const exposure = input.exposure;
   const serviceTemperatureC =
@@ -247,6 +250,7 @@ export function assessWithDataset(input: AssessInput, binder: BinderSystem, data
       flags: sortFlags(flags),
       warnings: [
         ...paste.value.warnings,
+        ...timelineWarnings,
         ...Object.entries(scenarioErrors).map(([scenario, e]) => ({ code: "scenario_failed", scenario, reason: e!.code, message: e!.message })),
       ] as AssessmentResult["warnings"],
     },

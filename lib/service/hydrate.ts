@@ -1,6 +1,6 @@
 import { binderSystemFromInput } from "../cement/binder-system";
 import { hydratePaste, type HydratedPaste, type HydrationWarning } from "../cement/hydrate-paste";
-import { hydrationTimeline, type TimelineEntry } from "../cement/hydration-timeline";
+import { hydrationTimeline, type TimelineEntry, type TimelineWarning } from "../cement/hydration-timeline";
 import { describeFailure } from "../equilibrium/failure";
 import { phaseIds } from "../equilibrium/equilibrate";
 import { loadDataset } from "../data/load-dataset";
@@ -28,7 +28,7 @@ export type HydrateOutput = {
   reactionDegrees: unknown;
   timeline: TimelineEntry[];
   temperatureC: number;
-  warnings: (HydrationWarning | BulkCompositionWarning)[];
+  warnings: (HydrationWarning | BulkCompositionWarning | TimelineWarning)[];
   presetLabels: string[];
   versions: { dataset: string };
   basis: "per 100 g binder (perM3: per m³ of concrete)";

@@ -1,6 +1,7 @@
 "use client";
 
 import { cautionsOf, flagsOf, keyFigures } from "../../lib/report/key-figures";
+import { computationNotesOf } from "../../lib/report/computation-notes";
 import { resultCharts } from "../../lib/charts/result-charts";
 import { withPhaseLabels } from "../../lib/charts/phase-labels";
 import { cautionTextsFor } from "../../lib/advisory/cautions";
@@ -11,12 +12,14 @@ import { formatChartCell } from "./data-table";
 
 /**
  * The results of an assessment: flags first (most severe first), the cautions (always shown, the standard
- * assessment cautions when a result carries none), key figures, charts and tables.
+ * assessment cautions when a result carries none), key figures, the computation notes (what could not be computed,
+ * what is extrapolated), charts and tables.
  */
 export function ResultsView({ result, heading = "Results" }: { result: unknown; heading?: string }) {
   const flags = flagsOf(result);
   const cautions = cautionsOf(result);
   const figures = keyFigures(result);
+  const notes = computationNotesOf(result);
   // Phase ids become readable names in legends, data tables and CSV columns alike.
   const charts = resultCharts(result).map(withPhaseLabels);
   return (
@@ -42,6 +45,16 @@ export function ResultsView({ result, heading = "Results" }: { result: unknown; 
               </div>
             ))}
           </dl>
+        </section>
+      ) : null}
+      {notes.length > 0 ? (
+        <section className="result-section" aria-labelledby="notes-title">
+          <h3 id="notes-title">Computation notes</h3>
+          <ul className="computation-notes">
+            {notes.map((note) => (
+              <li key={note}>{note}</li>
+            ))}
+          </ul>
         </section>
       ) : null}
       {charts.length > 0 ? (

@@ -42,6 +42,7 @@ export function renderMarkdownReport(model: ReportModel): string {
   lines.push("", "## Results", "");
   if (model.keyFigures.length > 0)
     lines.push(...table({ title: "Key figures", columns: ["Quantity", "Value", "Unit"], rows: model.keyFigures.map((k) => [k.label, formatCell(k.value), k.unit]) }));
+  if (model.computationNotes.length > 0) lines.push("### Computation notes", "", ...model.computationNotes.map((n) => `- ${n}`), "");
   for (const chart of model.charts) lines.push(...table(chartTable(chart)));
   for (const extra of model.tables) lines.push(...table(extra));
   lines.push("## Flags", "");

@@ -165,6 +165,12 @@ export function renderPdfReport(model: ReportModel, options: PdfOptions = {}): P
   heading(doc, "Results");
   if (model.keyFigures.length > 0)
     drawTable(doc, { title: "Key figures", columns: ["Quantity", "Value", "Unit"], rows: model.keyFigures.map((k) => [k.label, formatCell(k.value), k.unit]) }, 8);
+  if (model.computationNotes.length > 0) {
+    doc.font("Helvetica-Bold").fontSize(9).text("Computation notes");
+    doc.font("Helvetica").fontSize(8);
+    for (const note of model.computationNotes) doc.text(pdfSafe(`– ${note}`), { indent: 10 });
+    doc.moveDown(0.5);
+  }
   for (const chart of model.charts) {
     const chartHeight = 230;
     ensureSpace(doc, chartHeight + 10);

@@ -1,4 +1,5 @@
 import type { ChartData } from "../charts/chart-data";
+import { computationNotesOf } from "./computation-notes";
 import { axisCaption } from "../charts/chart-data";
 import { phaseLabel, withPhaseLabels } from "../charts/phase-labels";
 import type { Flag, FlagRobustness } from "../advisory/flag";
@@ -29,6 +30,8 @@ export type ReportModel = {
   assumptions: string[];
   provenance: { datasetVersion: string; files: { title: string; family: string; sources: string[]; date: string }[] };
   keyFigures: KeyFigure[];
+  /** What the engine could not compute, and where a model is extrapolated (`computationNotesOf`). */
+  computationNotes: string[];
   charts: ChartData[];
   tables: ReportTable[];
   flags: Flag[];
@@ -156,6 +159,7 @@ export function buildReportModel(source: ReportSource): ReportModel {
       files: source.datasetFiles.map((f) => ({ title: f.title, family: f.family, sources: f.provenance.sources, date: f.provenance.date })),
     },
     keyFigures: keyFigures(saved.result),
+    computationNotes: computationNotesOf(saved.result),
     // Phase series under their readable names, as on the results page (one label function for both).
     charts: source.charts.map(withPhaseLabels),
     tables: [...(source.tables ?? [])],

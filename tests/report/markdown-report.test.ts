@@ -34,6 +34,13 @@ describe("renderMarkdownReport", () => {
     expect(markdown).toContain("- Use a sulfate-resisting cement.");
   });
 
+  it("lists the computation notes of the result under the results, and leaves the section out without them", () => {
+    const saved = { ...sampleSaved, result: { ...(sampleSaved.result as object), warnings: [{ code: "loi_taken_as_co2", material: "cement", loiMassPercent: 2.1 }] } };
+    const text = renderMarkdownReport(buildReportModel({ saved, running, datasetFiles: [], charts: [] }));
+    expect(text).toContain("### Computation notes\n\n- The loss on ignition of the cement (2.1 %) is taken as CO2 (calcite), as no CO2 was given.");
+    expect(markdown).not.toContain("Computation notes");
+  });
+
   it("escapes table separators inside cells", () => {
     const saved = { ...sampleSaved, inputs: { ...(sampleSaved.inputs as object), note: "a | b" } };
     const text = renderMarkdownReport(buildReportModel({ saved, running, datasetFiles: [], charts: [] }));

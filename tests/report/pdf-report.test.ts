@@ -50,6 +50,13 @@ describe("renderPdfReport", () => {
     expect(text).toContain("Perkins & Palmer 1999");
     expect(text).toContain("WARNING: Sulfate attack");
   });
+
+  it("prints the computation notes of the result", async () => {
+    const saved = { ...sampleSaved, result: { ...(sampleSaved.result as object), warnings: [{ code: "loi_taken_as_co2", material: "cement", loiMassPercent: 2.1 }] } };
+    const text = shownText(await renderPdfReport(buildReportModel({ saved, running, datasetFiles: [], charts: [] }), { compress: false }));
+    expect(text).toContain("Computation notes");
+    expect(text).toContain("The loss on ignition of the cement (2.1 %) is taken as CO2 (calcite), as no CO2 was given.");
+  });
 });
 
 describe("pdfSafe", () => {

@@ -36,6 +36,15 @@ describe("results view", () => {
     expect(screen.getByRole("heading", { name: "Element temperature" })).toBeTruthy();
   });
 
+  it("shows the computation notes (a scenario that could not be computed) after the key figures, and no such section without them", () => {
+    render(<ResultsView result={{ ...result, warnings: [{ code: "scenario_failed", scenario: "sulfate", reason: "no_convergence", message: "at 12.0 mmol SO4 per 100 g binder: the phase set cycles" }] }} />);
+    const section = screen.getByRole("heading", { name: "Computation notes" }).closest("section")!;
+    expect(within(section).getByText(/^The sulfate scenario could not be computed \(no_convergence\)/)).toBeTruthy();
+    cleanup();
+    render(<ResultsView result={result} />);
+    expect(screen.queryByRole("heading", { name: "Computation notes" })).toBeNull();
+  });
+
   it("always shows the cautions, the standard assessment ones when the result carries none", () => {
     render(<ResultsView result={{ flags: [] }} />);
     for (const text of cautionTextsFor("assessment")) expect(screen.getByText(text)).toBeTruthy();

@@ -1,0 +1,41 @@
+import { valueAt } from "./key-figures";
+
+/**
+ * The notes of a result's computation, in sentences for the results page and the reports: what the engine could not
+ * compute (a scenario, ages of the timeline), where a model is extrapolated or beyond its range, and how an input was
+ * read. They come from `result.warnings` (`{ code, ... }`, see `AssessmentResult.warnings`); a code not known here is
+ * told by its own message, or by its code.
+ */
+export function computationNotesOf(result: unknown): string[] {
+  const warnings = valueAt(result, ["warnings"]);
+  if (!Array.isArray(warnings)) return [];
+  const notes = warnings.filter((w): w is Record<string, unknown> => typeof w === "object" && w !== null && typeof (w as { code?: unknown }).code === "string").map(noteOf);
+  return notes.filter((note, index) => notes.indexOf(note) === index);
+}
+
+const num = (value: unknown, digits = 3) => (typeof value === "number" && Number.isFinite(value) ? String(Number(value.toPrecision(digits))) : "?");
+const text = (value: unknown, fallback = "?") => (typeof value === "string" && value ? value : fallback);
+const sentence = (value: string) => value.charAt(0).toUpperCase() + value.slice(1) + (/[.!?]$/.test(value) ? "" : ".");
+
+function noteOf(w: Record<string, unknown>): string {
+  switch (w.code) {
+    case "scenario_failed":
+      return `The ${text(w.scenario)} scenario could not be computed (${text(w.reason)}): ${text(w.message)}. Its chart and its flags are missing from this result.`;
+    case "timeline_ages_unsolved":
+      return sentence(`hydration timeline: ${text(w.message)}`);
+    case "analysis_total_out_of_range":
+      return `The ${text(w.material)} analysis sums to ${num(w.totalMassPercent)} %, outside ${num(w.minMassPercent)}–${num(w.maxMassPercent)} %: check it.`;
+    case "loi_taken_as_co2":
+      return `The loss on ignition of the ${text(w.material)} (${num(w.loiMassPercent)} %) is taken as CO2 (calcite), as no CO2 was given.`;
+    case "water_insufficient_for_full_hydration":
+      return `The w/b ${num(w.waterBinderRatio)} is below the ${num(w.minimumSaturated)} (water-cured) to ${num(w.minimumSealed)} (sealed) that full hydration needs (Powers' model): the paste self-desiccates and part of the binder stays unreacted.`;
+    case "ionic_strength_beyond_activity_model":
+      return `The pore solution's ionic strength, ${num(w.ionicStrengthMolPerKg)} mol/kg, is above the ${num(w.validUpToMolPerKg)} mol/kg to which the extended Debye–Hückel activity model is used with confidence: dissolved concentrations and pH are less certain.`;
+    case "scm_model_extrapolated":
+      return w.reason === "temperature_outside_data"
+        ? `The reaction degree of the ${text(w.type)} is extrapolated: the curing temperature ${num(w.curingTemperatureC)} °C lies outside the ${num(w.minC)}–${num(w.maxC)} °C of its data.`
+        : `The reaction degree of the ${text(w.type)} is extrapolated beyond the last age of its data (${num(w.lastDataAgeDays)} d; equivalent age ${num(w.equivalentAgeDays)} d).`;
+    default:
+      return typeof w.message === "string" && w.message ? sentence(w.message) : `Note: ${String(w.code)}.`;
+  }
+}

@@ -1,0 +1,34 @@
+import { describe, it, expect } from "vitest";
+import { computationNotesOf } from "../../lib/report/computation-notes";
+
+describe("computation notes", () => {
+  it("tells each warning of the result in a sentence with its figures", () => {
+    const notes = computationNotesOf({
+      warnings: [
+        { code: "water_insufficient_for_full_hydration", waterBinderRatio: 0.26, minimumSealed: 0.419, minimumSaturated: 0.356 },
+        { code: "ionic_strength_beyond_activity_model", ionicStrengthMolPerKg: 1.94, validUpToMolPerKg: 1 },
+        { code: "scenario_failed", scenario: "thaumasite", reason: "no_convergence", message: "at 5 °C: the phase set cycles" },
+        { code: "timeline_ages_unsolved", ageDays: [1030, 3650], reason: "no_convergence", message: "the engine could not solve the assemblage at ages 1030 d, 3650 d (the phase set cycles); the timeline leaves them out" },
+        { code: "analysis_total_out_of_range", material: "cement", totalMassPercent: 95.4, minMassPercent: 97, maxMassPercent: 101 },
+        { code: "scm_model_extrapolated", type: "slag", reason: "temperature_outside_data", curingTemperatureC: 80, minC: 5, maxC: 60 },
+        { code: "near_invariant_point", message: "the assemblage lies near an invariant point" },
+        { code: "something_new" },
+      ],
+    });
+    expect(notes).toEqual([
+      "The w/b 0.26 is below the 0.356 (water-cured) to 0.419 (sealed) that full hydration needs (Powers' model): the paste self-desiccates and part of the binder stays unreacted.",
+      "The pore solution's ionic strength, 1.94 mol/kg, is above the 1 mol/kg to which the extended Debye–Hückel activity model is used with confidence: dissolved concentrations and pH are less certain.",
+      "The thaumasite scenario could not be computed (no_convergence): at 5 °C: the phase set cycles. Its chart and its flags are missing from this result.",
+      "Hydration timeline: the engine could not solve the assemblage at ages 1030 d, 3650 d (the phase set cycles); the timeline leaves them out.",
+      "The cement analysis sums to 95.4 %, outside 97–101 %: check it.",
+      "The reaction degree of the slag is extrapolated: the curing temperature 80 °C lies outside the 5–60 °C of its data.",
+      "The assemblage lies near an invariant point.",
+      "Note: something_new.",
+    ]);
+  });
+
+  it("gives no notes for a result without warnings, and ignores entries that are not warnings", () => {
+    expect(computationNotesOf({})).toEqual([]);
+    expect(computationNotesOf({ warnings: [null, 3, { message: "no code" }] })).toEqual([]);
+  });
+});

@@ -80,13 +80,15 @@ describe("cement and SCM presets", () => {
     expect(binder.presetLabels.every((label) => label.includes("typical, replace with your certificate"))).toBe(true);
   });
 
-  it("refuses extra SCMs on top of a blended preset with a typed error", () => {
-    const input = binderInputSchema.parse({
-      cement: { kind: "preset", presetId: "en197-cem-iii-a" },
+  it("refuses extra SCMs on top of a blended preset with a typed error (the schema rejects it first; this guards inputs built in code)", () => {
+    const valid = binderInputSchema.parse({
+      cement: { kind: "preset", presetId: "en197-cem-i" },
       supplementaryMaterials: [{ type: "silica-fume", massPercentOfBinder: 5, composition: { kind: "preset", presetId: "silica-fume-typical" } }],
       mix,
       age,
     });
+    const input = { ...valid, cement: { kind: "preset" as const, presetId: "en197-cem-iii-a" } };
+    expect(binderInputSchema.safeParse(input).success).toBe(false);
     expect(resolveBinder(input)).toEqual({ ok: false, error: { code: "preset_already_blended", presetId: "en197-cem-iii-a", field: "supplementaryMaterials" } });
   });
 });

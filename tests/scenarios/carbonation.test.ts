@@ -2,7 +2,8 @@ import { describe, expect, it } from "vitest";
 import { binderSystemFromInput } from "../../lib/cement/binder-system";
 import cementPresets from "../../lib/data/binders/cement-presets.json";
 import { carbonationDepassivationFlag } from "../../lib/advisory/flag-rules/carbonation-depassivation";
-import { carbonationScenario } from "../../lib/scenarios/carbonation";
+import { caToSiOf, carbonationScenario } from "../../lib/scenarios/carbonation";
+import type { HydratedPaste } from "../../lib/cement/hydrate-paste";
 import { co2BindingCapacityFromOxidesMolPerM3 } from "../../lib/scenarios/carbonation-depth";
 
 const cemI = cementPresets.presets.find((p) => p.id === "en197-cem-i")!;
@@ -57,5 +58,21 @@ describe("carbonation scenario", () => {
     expect(carbonationDepassivationFlag(thin, { exposure: { co2Percent: 0.04, reinforced: true, coverMm: 15 } })?.severity).toBe("warning");
     const thick = run(0.45, 60).result;
     expect(carbonationDepassivationFlag(thick, { exposure: { co2Percent: 0.04, reinforced: true, coverMm: 60 } })?.severity).not.toBe("warning");
+  });
+});
+
+describe("the Ca/Si of the C-S-H solution", () => {
+  const pasteWith = (members: { id: string; moleFraction: number }[]) => ({ assemblage: { phases: [{ id: "csh", members }] } }) as unknown as HydratedPaste;
+
+  it("weighs Ca and Si by mole fraction over end-members of one Si: 0.8 × 1.67 + 0.2 × 0.83 = 1.502 (by hand)", () => {
+    expect(caToSiOf(pasteWith([{ id: "csh-ca1.67-si1", moleFraction: 0.8 }, { id: "csh-ca0.83-si1", moleFraction: 0.2 }]))).toBeCloseTo(1.502, 10);
+  });
+
+  it("divides by the Si of end-members with fewer Si per formula unit: (0.5 × 1.5 + 0.5 × 1.3333) / (0.5 × 0.6667 + 0.5 × 1) = 1.70 (by hand), not the 1.42 of the Ca numbers alone", () => {
+    expect(caToSiOf(pasteWith([{ id: "csh-ca1.5-si0.6667", moleFraction: 0.5 }, { id: "csh-ca1.3333-si1", moleFraction: 0.5 }]))).toBeCloseTo(1.41665 / 0.83335, 10);
+  });
+
+  it("gives null without C-S-H", () => {
+    expect(caToSiOf({ assemblage: { phases: [] } } as unknown as HydratedPaste)).toBeNull();
   });
 });

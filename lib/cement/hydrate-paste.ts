@@ -3,6 +3,7 @@ import { loadDataset, type Dataset } from "../data/load-dataset";
 import { suppressedPhases } from "../data/kinetic-constraints";
 import alkaliUptake from "../data/binders/alkali-uptake.json";
 import gelPores from "../data/binders/gel-pores.json";
+import { gelWaterInCarriersMol } from "./csh-gel-water";
 import { equilibrateSystem } from "../equilibrium/equilibrate";
 import { getOrCreate } from "../memo/get-or-create";
 import type { EquilibriumFailure } from "../equilibrium/failure";
@@ -44,8 +45,10 @@ export type HydratedPaste = {
     poreSolutionVolumeCm3: number;
     /** Empty space left by chemical shrinkage (sealed curing; water-filled when water-cured). */
     chemicalShrinkageCm3: number;
-    /** Gel pores of the C-S-H at Powers' characteristic gel porosity (`gel-pores.json`). */
+    /** Gel pores of the C-S-H at Powers' characteristic gel porosity (`gel-pores.json`), its own gel water included. */
     gelPoreVolumeCm3: number;
+    /** Gel water the C-S-H end-members hold inside their own molar volume (`csh-gel-water.ts`), cm³ per 100 g binder. */
+    gelWaterInCshCm3: number;
     /** Pore solution + shrinkage space − gel pores: Powers' capillary pores. */
     capillaryPoreVolumeCm3: number;
     /**
@@ -186,7 +189,9 @@ export function hydratePaste(
   volumes["pore-solution"] = poreSolutionVolumeCm3;
   const gelPoreCarrierVolumeCm3 = phases.filter((p) => p.origin === "hydrate" && gelPores.carrierPhaseIds.value.includes(p.id)).reduce((sum, p) => sum + p.volumeCm3, 0);
   const gelPorosity = gelPores.characteristicGelPorosity.value;
-  const poreClasses = classifyPoreSpace(poreSolutionVolumeCm3, shrinkage, gelPoreCarrierVolumeCm3, gelPorosity, initialVolume);
+  // Gel water the C-S-H end-members hold in their own molar volume, at the density of the mixing water.
+  const gelWaterInCarriersCm3 = (gelWaterInCarriersMol(assemblage, elementsOf) * WATER_G_PER_MOL) / mixingWaterDensity;
+  const poreClasses = classifyPoreSpace(poreSolutionVolumeCm3, shrinkage, gelPoreCarrierVolumeCm3, gelPorosity, initialVolume, gelWaterInCarriersCm3);
 
   // Bound alkali hydroxide XOH carries ½ H2O per X.
   const boundWaterG = (boundWaterMol(assemblage, elementsOf) + Object.values(boundMol).reduce((a, b) => a + b / 2, 0)) * WATER_G_PER_MOL;
@@ -218,8 +223,9 @@ export function hydratePaste(
         poreSolutionVolumeCm3,
         chemicalShrinkageCm3: shrinkage,
         gelPoreVolumeCm3: poreClasses.gelPoreVolumeCm3,
+        gelWaterInCshCm3: gelWaterInCarriersCm3,
         capillaryPoreVolumeCm3: poreClasses.capillaryPoreVolumeCm3,
-        waterFilledAndEmptyFraction: waterFilledAndEmptyFraction(poreSolutionVolumeCm3, shrinkage, initialVolume),
+        waterFilledAndEmptyFraction: waterFilledAndEmptyFraction(poreSolutionVolumeCm3, shrinkage, initialVolume, gelWaterInCarriersCm3),
         capillaryFraction: poreClasses.capillaryPorosityFraction,
         characteristicGelPorosity: gelPorosity,
         balance: volumeBalance(solidVolumes, poreSolutionVolumeCm3, shrinkage, initialVolume),

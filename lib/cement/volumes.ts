@@ -39,22 +39,22 @@ export function chemicalShrinkageCm3(input: ShrinkageInput): number {
 }
 
 /**
- * φ_we = (V(pore solution) + Vcs) / V0, a fraction of the paste volume: every pore the solids leave, water-filled
- * or empty, gel pores of the C-S-H included. Equal to Powers' capillary porosity only when the hydrate volumes
- * already contain their gel water (as in Powers' own gel).
+ * φ_we = (V(pore solution) + Vcs + V_gw) / V0, a fraction of the paste volume: every pore the solids leave, water-filled
+ * or empty, gel pores of the C-S-H included, with V_gw the gel water that the C-S-H end-members carry in their own
+ * molar volume (`gelWaterInCarriersCm3`, 0 when they hold the solid particle only).
  */
-export function waterFilledAndEmptyFraction(poreSolutionVolumeCm3: number, chemicalShrinkageVolumeCm3: number, initialPasteVolume: number): number {
-  return (poreSolutionVolumeCm3 + chemicalShrinkageVolumeCm3) / initialPasteVolume;
+export function waterFilledAndEmptyFraction(poreSolutionVolumeCm3: number, chemicalShrinkageVolumeCm3: number, initialPasteVolume: number, gelWaterInCarriersCm3 = 0): number {
+  return (poreSolutionVolumeCm3 + chemicalShrinkageVolumeCm3 + gelWaterInCarriersCm3) / initialPasteVolume;
 }
 
 export type PoreSpaceClasses = {
   /** V_gp: gel pores of the gel-pore carriers, cm³ per 100 g binder. */
   gelPoreVolumeCm3: number;
-  /** V(pore solution) + Vcs − V_gp: capillary pores in Powers' sense, cm³ per 100 g binder. */
+  /** V(pore solution) + Vcs + V_gw − V_gp: capillary pores in Powers' sense, cm³ per 100 g binder. */
   capillaryPoreVolumeCm3: number;
   /** V_gp / V0. */
   gelPorosityFraction: number;
-  /** φ_cap = (V(pore solution) + Vcs − V_gp) / V0 (Powers & Brownyard 1947). */
+  /** φ_cap = (V(pore solution) + Vcs + V_gw − V_gp) / V0 (Powers & Brownyard 1947). */
   capillaryPorosityFraction: number;
 };
 
@@ -62,8 +62,10 @@ export type PoreSpaceClasses = {
  * Splits the space the solids leave (pore solution + shrinkage space) into gel and capillary pores as Powers &
  * Brownyard (1947) do. The gel pores belong to the gel-pore-carrying solid (the C-S-H) at the characteristic gel
  * porosity φ_g (pores per volume of gel): V_gp = φ_g / (1 − φ_g) · V(carrier solid), limited to the pore space
- * present (they are the smallest pores, the last to empty). Gel + capillary = pore solution + shrinkage exactly;
- * the split classifies volume only and leaves the pore solution's chemistry and every balance unchanged.
+ * present (they are the smallest pores, the last to empty). Where the carrier's end-members hold gel water in their
+ * own molar volume (`gelWaterInCarriersCm3`, V_gw), the solid particle is V(carrier) − V_gw and V_gw counts among the
+ * gel pores, so that water is not counted twice. Gel + capillary = pore solution + shrinkage + V_gw exactly; the split
+ * classifies volume only and leaves the pore solution's chemistry and every balance unchanged.
  */
 export function classifyPoreSpace(
   poreSolutionVolumeCm3: number,
@@ -71,11 +73,15 @@ export function classifyPoreSpace(
   gelPoreCarrierVolumeCm3: number,
   characteristicGelPorosity: number,
   initialPasteVolume: number,
+  gelWaterInCarriersCm3 = 0,
 ): PoreSpaceClasses {
   const poreSpaceCm3 = poreSolutionVolumeCm3 + chemicalShrinkageVolumeCm3;
-  const gelCapacityCm3 = (characteristicGelPorosity / (1 - characteristicGelPorosity)) * gelPoreCarrierVolumeCm3;
-  const gelPoreVolumeCm3 = Math.max(0, Math.min(gelCapacityCm3, poreSpaceCm3));
-  const capillaryPoreVolumeCm3 = poreSpaceCm3 - gelPoreVolumeCm3;
+  // The carrier's own gel water is part of its gel pores already; only the rest is taken from the pore space.
+  const particleVolumeCm3 = Math.max(0, gelPoreCarrierVolumeCm3 - gelWaterInCarriersCm3);
+  const gelCapacityCm3 = (characteristicGelPorosity / (1 - characteristicGelPorosity)) * particleVolumeCm3;
+  const fromPoreSpaceCm3 = Math.max(0, Math.min(gelCapacityCm3 - gelWaterInCarriersCm3, poreSpaceCm3));
+  const gelPoreVolumeCm3 = gelWaterInCarriersCm3 + fromPoreSpaceCm3;
+  const capillaryPoreVolumeCm3 = poreSpaceCm3 - fromPoreSpaceCm3;
   return {
     gelPoreVolumeCm3,
     capillaryPoreVolumeCm3,

@@ -2,8 +2,7 @@ import { describe, expect, it } from "vitest";
 import { binderSystemFromInput } from "../../lib/cement/binder-system";
 import cementPresets from "../../lib/data/binders/cement-presets.json";
 import { carbonationDepassivationFlag } from "../../lib/advisory/flag-rules/carbonation-depassivation";
-import { caToSiOf, carbonationScenario } from "../../lib/scenarios/carbonation";
-import type { HydratedPaste } from "../../lib/cement/hydrate-paste";
+import { carbonationScenario } from "../../lib/scenarios/carbonation";
 import { co2BindingCapacityFromOxidesMolPerM3 } from "../../lib/scenarios/carbonation-depth";
 
 const cemI = cementPresets.presets.find((p) => p.id === "en197-cem-i")!;
@@ -40,7 +39,7 @@ describe("carbonation scenario", () => {
   });
 
   // Sheltered outdoor CEM I concrete: k about 2.5–6 mm/√year (Lagerblad 2005, CBI report 2:2005; EN 16757
-  // Annex BB; from memory). The engine gives 2.4, 3.2 and 4.0 at w/c 0.45, 0.55, 0.65: the lowest is just below
+  // Annex BB; from memory). The engine gives 2.46, 3.25 and 4.03 at w/c 0.45, 0.55, 0.65: the lowest is just below
   // the band, so w/c 0.45 is pinned with a known deviation of at most 0.3 mm/√year.
   it("gives carbonation coefficients in the sheltered-outdoor range for w/c 0.55–0.65 and rising with w/c (Lagerblad 2005, from memory)", () => {
     const k = [0.45, 0.55, 0.65].map((wc) => (wc === 0.55 ? result : run(wc).result).depth!.coefficientMmPerSqrtYear);
@@ -58,21 +57,5 @@ describe("carbonation scenario", () => {
     expect(carbonationDepassivationFlag(thin, { exposure: { co2Percent: 0.04, reinforced: true, coverMm: 15 } })?.severity).toBe("warning");
     const thick = run(0.45, 60).result;
     expect(carbonationDepassivationFlag(thick, { exposure: { co2Percent: 0.04, reinforced: true, coverMm: 60 } })?.severity).not.toBe("warning");
-  });
-});
-
-describe("the Ca/Si of the C-S-H solution", () => {
-  const pasteWith = (members: { id: string; moleFraction: number }[]) => ({ assemblage: { phases: [{ id: "csh", members }] } }) as unknown as HydratedPaste;
-
-  it("weighs Ca and Si by mole fraction over end-members of one Si: 0.8 × 1.67 + 0.2 × 0.83 = 1.502 (by hand)", () => {
-    expect(caToSiOf(pasteWith([{ id: "csh-ca1.67-si1", moleFraction: 0.8 }, { id: "csh-ca0.83-si1", moleFraction: 0.2 }]))).toBeCloseTo(1.502, 10);
-  });
-
-  it("divides by the Si of end-members with fewer Si per formula unit: (0.5 × 1.5 + 0.5 × 1.3333) / (0.5 × 0.6667 + 0.5 × 1) = 1.70 (by hand), not the 1.42 of the Ca numbers alone", () => {
-    expect(caToSiOf(pasteWith([{ id: "csh-ca1.5-si0.6667", moleFraction: 0.5 }, { id: "csh-ca1.3333-si1", moleFraction: 0.5 }]))).toBeCloseTo(1.41665 / 0.83335, 10);
-  });
-
-  it("gives null without C-S-H", () => {
-    expect(caToSiOf({ assemblage: { phases: [] } } as unknown as HydratedPaste)).toBeNull();
   });
 });

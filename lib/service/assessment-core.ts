@@ -27,6 +27,7 @@ import { sulfateIngress, type SulfateScenario } from "../scenarios/sulfate-ingre
 import type { Dataset } from "../data/load-dataset";
 import { alkaliBoundFractionOf, bookedPaste, recordPaste, type ScenarioBase, type WarmStartBook } from "../scenarios/sweep";
 import { binderInputOf, type AssessInput } from "../schema/assess-input";
+import { pasteFailureMessage } from "./paste-failure";
 import { domainError, validationError, type ServiceOutcome } from "./outcome";
 
 
@@ -127,7 +128,7 @@ export function assessWithDataset(input: AssessInput, binder: BinderSystem, data
   const reacted = system.value.composition.reactedElementsMol;
   const warmFrom = (start: HydratedPaste | undefined) => (start ? { warmStart: start.assemblage.state, alkaliBoundFraction: alkaliBoundFractionOf(start, reacted) } : {});
   const paste = hydratePaste(system.value.composition, { temperatureC, binderContentKgPerM3: input.mix.binderContentKgPerM3, ...overrides, ...warmFrom(bookedPaste(book, "base", temperatureC)) });
-  if (!paste.ok) return domainError(paste.error.code, describeFailure(paste.error));
+  if (!paste.ok) return domainError(paste.error.code, pasteFailureMessage(paste.error, { age: input.age, temperatureC, composition: system.value.composition }));
   recordPaste(book, "base", temperatureC, paste.value);
   let timeline: TimelineEntry[] = [];
   const timelineWarnings: TimelineWarning[] = [];

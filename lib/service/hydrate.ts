@@ -7,6 +7,7 @@ import { loadDataset } from "../data/load-dataset";
 import { hydrateInput, type HydrateInput } from "../schema/hydrate-input";
 import { binderSystemIssue } from "../cement/binder-system-issue";
 import { formatIssues } from "../schema/format-issues";
+import { pasteFailureMessage } from "./paste-failure";
 import { domainError, validationError, type ServiceOutcome } from "./outcome";
 import type { BulkCompositionWarning } from "../cement/bulk-composition";
 
@@ -62,7 +63,7 @@ export function runHydrate(raw: unknown): ServiceOutcome<HydrateOutput> {
   const temperatureC = input.age.mode === "age" ? input.age.curingTemperatureC : (input.temperatureC ?? DEFAULT_TEMPERATURE_C);
   const overrides = { suppress: input.suppressedPhases, enable: input.allowedPhases, dataset: dataset.value };
   const paste = hydratePaste(system.value.composition, { temperatureC, binderContentKgPerM3: input.mix.binderContentKgPerM3, ...overrides });
-  if (!paste.ok) return domainError(paste.error.code, describeFailure(paste.error));
+  if (!paste.ok) return domainError(paste.error.code, pasteFailureMessage(paste.error, { age: input.age, temperatureC, composition: system.value.composition }));
   let timeline: TimelineEntry[] = [];
   const warnings: HydrateOutput["warnings"] = [...paste.value.warnings];
   if (input.timeline) {

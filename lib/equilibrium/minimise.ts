@@ -119,8 +119,14 @@ export function minimise(p: EquilibriumProblem, options: MinimiseOptions = {}): 
   if (retry.ok) return { ok: true, value: { ...retry.value, warmStarted: false } };
   // Then let solids related by water alone coexist with the solution (gypsum + anhydrite in a brine).
   // Not tried earlier: in hydrated cement the AFm hydrates make such pairs near-degenerate.
-  const withWaterPairs = run(p, cloneState(start.value), newtonOptions, options, deadline, started, limitMs, true);
+  const withWaterPairs = run(p, cloneState(start.value), newtonOptions, options, deadline, started, limitMs, "after-cycling");
   if (withWaterPairs.ok) return { ok: true, value: { ...withWaterPairs.value, warmStarted: false } };
+  // Then the same with such pairs allowed from the first addition. A nearly dry paste (a self-desiccated low-w/b paste
+  // at a long age, a few mg of solution per 100 g binder) has its water activity set by an AFm hydrate pair
+  // (monosulfate-12/-14) beside the solution; swapping one for the other changed the solution's water content each
+  // time and the search cycled through AFm, sulfate and carbonate sets until the resets ran out.
+  const withWaterPairsFromStart = run(p, cloneState(start.value), newtonOptions, options, deadline, started, limitMs, "from-start");
+  if (withWaterPairsFromStart.ok) return { ok: true, value: { ...withWaterPairsFromStart.value, warmStarted: false } };
   // Last, the LP's phase set less one phase at a time, the gas first. The LP's set can be singular for Newton from the
   // start (a gas of one species beside the solution and the solids in a paste diluted in thousands of times its mass of
   // water near 0 °C; nine solids of a sulfate- and carbonate-dosed paste at 0–15 °C, amounts running to ±1e6 mol), and
@@ -153,7 +159,7 @@ function run(
   deadline: number,
   started: number,
   limitMs: number,
-  allowWaterPairs = false,
+  allowWaterPairs: false | "after-cycling" | "from-start" = false,
   maxResets = MAX_RESETS,
   maxChangesCap = Infinity,
 ): EquilibriumOutcome<Omit<MinimiseReport, "warmStarted">> {
@@ -272,7 +278,8 @@ function run(
     const regularity = phaseSetRegularity(p, s, true);
     // Once the search cycles, a solid related to a present one by water alone (gypsum/anhydrite in a
     // brine) is tried next to it, not swapped: they coexist at the one water activity where they balance.
-    const waterPairAfterCycling = allowWaterPairs && regularity === "dependent" && cycled && phaseSetRegularity(p, s, false) === "regular";
+    const waterPairAfterCycling =
+      allowWaterPairs !== false && regularity === "dependent" && (cycled || allowWaterPairs === "from-start") && phaseSetRegularity(p, s, false) === "regular";
     if (regularity !== "regular" && !waterPairAfterCycling) {
       // Phase rule: swap with a present phase whose removal restores a regular system. First the one the simplex ratio
       // test names for this dependency; then any, in index order.

@@ -1,5 +1,4 @@
 import { caToSiOf } from "../cement/csh-ca-si";
-import type { HydratedPaste } from "../cement/hydrate-paste";
 import type { ExposureInput } from "../schema/exposure-input";
 import thresholds from "../data/advisory-thresholds.json";
 import { estimateCarbonation, type CarbonationEstimate } from "./carbonation-depth";

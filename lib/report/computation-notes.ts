@@ -4,17 +4,20 @@ import { valueAt } from "./key-figures";
  * The notes of a result's computation, in sentences for the results page and the reports: what the engine could not
  * compute (a scenario, ages of the timeline), where a model is extrapolated or beyond its range, and how an input was
  * read. They come from `result.warnings` (`{ code, ... }`, see `AssessmentResult.warnings`); a code not known here is
- * told by its own message, or by its code.
+ * told by its own message, or by its code. A warning of the hydration timeline alone (`scope: "timeline"`) says so.
  */
 export function computationNotesOf(result: unknown): string[] {
   const warnings = valueAt(result, ["warnings"]);
   if (!Array.isArray(warnings)) return [];
-  const notes = warnings.filter((w): w is Record<string, unknown> => typeof w === "object" && w !== null && typeof (w as { code?: unknown }).code === "string").map(noteOf);
+  const notes = warnings
+    .filter((w): w is Record<string, unknown> => typeof w === "object" && w !== null && typeof (w as { code?: unknown }).code === "string")
+    .map((w) => (w.scope === "timeline" && w.code !== "timeline_ages_unsolved" ? `In the hydration timeline: ${lowerFirst(noteOf(w))}` : noteOf(w)));
   return notes.filter((note, index) => notes.indexOf(note) === index);
 }
 
 const num = (value: unknown, digits = 3) => (typeof value === "number" && Number.isFinite(value) ? String(Number(value.toPrecision(digits))) : "?");
 const text = (value: unknown, fallback = "?") => (typeof value === "string" && value ? value : fallback);
+const lowerFirst = (value: string) => value.charAt(0).toLowerCase() + value.slice(1);
 const sentence = (value: string) => value.charAt(0).toUpperCase() + value.slice(1) + (/[.!?]$/.test(value) ? "" : ".");
 
 function noteOf(w: Record<string, unknown>): string {

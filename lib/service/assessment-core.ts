@@ -131,13 +131,14 @@ export function assessWithDataset(input: AssessInput, binder: BinderSystem, data
   if (!paste.ok) return domainError(paste.error.code, pasteFailureMessage(paste.error, { age: input.age, temperatureC, composition: system.value.composition }));
   recordPaste(book, "base", temperatureC, paste.value);
   let timeline: TimelineEntry[] = [];
-  const timelineWarnings: TimelineWarning[] = [];
+  const timelineWarnings: (TimelineWarning & { scope: "timeline" })[] = [];
   if (withTimeline) {
     const series = hydrationTimeline(system.value.binder, { temperatureC, points, firstAgeDays: 1 / 24, lastAgeDays: 3650, ...overrides });
     if (!series.ok) return domainError(series.error.code, describeFailure(series.error));
     timeline = series.value.entries;
-    // The paste's own warnings are those of the assessment's age; the timeline adds only what is new.
-    timelineWarnings.push(...series.value.warnings.filter((w) => !paste.value.warnings.some((x) => x.code === w.code)));
+    // The paste's own warnings are those of the assessment's age; the timeline adds only what is new, marked as its own
+    // (a reaction model extrapolated to 10 years in the chart says nothing of the assessment's age).
+    timelineWarnings.push(...series.value.warnings.filter((w) => !paste.value.warnings.some((x) => x.code === w.code)).map((w) => ({ ...w, scope: "timeline" as const })));
   }
   const exposure = input.exposure;
   const serviceTemperatureC =

@@ -27,6 +27,11 @@ describe("computation notes", () => {
     ]);
   });
 
+  it("says when a warning concerns the hydration timeline only, not the assessment's age", () => {
+    const notes = computationNotesOf({ warnings: [{ code: "scm_model_extrapolated", type: "slag", reason: "age_beyond_data", equivalentAgeDays: 3650, lastDataAgeDays: 365, scope: "timeline" }] });
+    expect(notes).toEqual(["In the hydration timeline: the reaction degree of the slag is extrapolated beyond the last age of its data (365 d; equivalent age 3650 d)."]);
+  });
+
   it("gives no notes for a result without warnings, and ignores entries that are not warnings", () => {
     expect(computationNotesOf({})).toEqual([]);
     expect(computationNotesOf({ warnings: [null, 3, { message: "no code" }] })).toEqual([]);

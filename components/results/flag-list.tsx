@@ -1,4 +1,5 @@
 import { sortFlags, type Flag, type Severity } from "../../lib/advisory/flag";
+import { robustnessSentence } from "../../lib/report/robustness-sentence";
 
 /** How each severity is told: a word and an icon, so the meaning never rests on colour alone. */
 export const SEVERITY_PRESENTATION: Record<Severity, { word: string; icon: string }> = {
@@ -6,10 +7,6 @@ export const SEVERITY_PRESENTATION: Record<Severity, { word: string; icon: strin
   caution: { word: "Caution", icon: "◆" },
   info: { word: "Information", icon: "●" },
 };
-
-function percent(fraction: number): string {
-  return `${Math.round(fraction * 100)} %`;
-}
 
 /** The flags of a result, most severe first (`sortFlags`), each with explanation, basis and actions. */
 export function FlagList({ flags }: { flags: readonly Flag[] }) {
@@ -49,8 +46,7 @@ export function FlagList({ flags }: { flags: readonly Flag[] }) {
             ) : null}
             {flag.robustness ? (
               <p className="robustness">
-                Raised in {percent(flag.robustness.firedFraction)} of {flag.robustness.samples} Monte Carlo samples
-                {flag.robustness.notEvaluated ? ` (${flag.robustness.notEvaluated} more could not evaluate it: its scenario did not converge there)` : ""}.
+                {robustnessSentence(flag.robustness)}
               </p>
             ) : null}
           </li>

@@ -25,7 +25,7 @@ export type FlagId = (typeof FLAG_IDS)[number];
 
 /** How often a flag fired across Monte Carlo samples of the uncertain data. */
 export type FlagRobustness = {
-  /** Fraction of samples, 0–1, in which the flag fired. */
+  /** Fraction of samples, 0–1, in which the flag was raised as a caution or warning (information does not count). */
   firedFraction: number;
   /** Number of samples evaluated. */
   samples: number;

@@ -2,7 +2,7 @@ import type { ChartData } from "../charts/chart-data";
 import { computationNotesOf } from "./computation-notes";
 import { axisCaption } from "../charts/chart-data";
 import { phaseLabel, withPhaseLabels } from "../charts/phase-labels";
-import type { Flag, FlagRobustness } from "../advisory/flag";
+import type { Flag } from "../advisory/flag";
 import { sortFlags } from "../advisory/flag";
 import type { DatasetFileInfo } from "../data/dataset";
 import type { SavedAssessment, Versions } from "../store/assessment-store";
@@ -67,11 +67,7 @@ export function formatCell(value: unknown): string {
   return json === "[]" || json === "{}" ? "(none)" : json;
 }
 
-/** How often a flag fired in the Monte Carlo samples, as a report sentence. */
-export function robustnessSentence(robustness: FlagRobustness): string {
-  const skipped = robustness.notEvaluated ? ` (${robustness.notEvaluated} more could not evaluate it: its scenario did not converge there)` : "";
-  return `Fired in ${formatCell(robustness.firedFraction * 100)} % of ${robustness.samples} Monte Carlo samples${skipped}.`;
-}
+export { robustnessSentence } from "./robustness-sentence";
 
 /** The rows of a chart as a table (x column, then every series with its unit). */
 export function chartTable(chart: ChartData): ReportTable {

@@ -30,7 +30,7 @@ describe("renderMarkdownReport", () => {
   it("shows flags with severity in words, basis, robustness and actions", () => {
     expect(markdown).toContain("### WARNING: Sulfate attack: ettringite expansion possible");
     expect(markdown).toContain("Basis: EN 206 Table 2");
-    expect(markdown).toContain("Fired in 84 % of 200 Monte Carlo samples.");
+    expect(markdown).toContain("A caution or warning in 84 % of 200 Monte Carlo samples.");
     expect(markdown).toContain("- Use a sulfate-resisting cement.");
   });
 

@@ -63,7 +63,7 @@ describe("formatCell", () => {
 
 describe("robustnessSentence", () => {
   it("gives the fired fraction and the samples, and the samples that could not evaluate the flag when there are any", () => {
-    expect(robustnessSentence({ firedFraction: 0.84, samples: 200 })).toBe("Fired in 84 % of 200 Monte Carlo samples.");
-    expect(robustnessSentence({ firedFraction: 0.5, samples: 190, notEvaluated: 10 })).toBe("Fired in 50 % of 190 Monte Carlo samples (10 more could not evaluate it: its scenario did not converge there).");
+    expect(robustnessSentence({ firedFraction: 0.84, samples: 200 })).toBe("A caution or warning in 84 % of 200 Monte Carlo samples.");
+    expect(robustnessSentence({ firedFraction: 0.5, samples: 190, notEvaluated: 10 })).toBe("A caution or warning in 50 % of 190 Monte Carlo samples (10 more could not evaluate it: its scenario did not converge there).");
   });
 });

@@ -35,12 +35,12 @@ describe("flag list", () => {
     expect(screen.getByText("Explanation of delayed-ettringite-formation")).toBeTruthy();
     expect(screen.getByText(/Basis of delayed-ettringite-formation/)).toBeTruthy();
     expect(screen.getByText("Check delayed-ettringite-formation")).toBeTruthy();
-    expect(screen.getByText("Raised in 25 % of 200 Monte Carlo samples.")).toBeTruthy();
+    expect(screen.getByText("A caution or warning in 25 % of 200 Monte Carlo samples.")).toBeTruthy();
   });
 
   it("says how many samples could not evaluate a flag", () => {
     render(<FlagList flags={[{ ...flag("chloride-binding-limit", "warning"), robustness: { firedFraction: 0.5, samples: 180, notEvaluated: 20 } }]} />);
-    expect(screen.getByText("Raised in 50 % of 180 Monte Carlo samples (20 more could not evaluate it: its scenario did not converge there).")).toBeTruthy();
+    expect(screen.getByText("A caution or warning in 50 % of 180 Monte Carlo samples (20 more could not evaluate it: its scenario did not converge there).")).toBeTruthy();
   });
 
   it("says so when no flag is raised", () => {

@@ -65,7 +65,8 @@ describe("thaumasite (Schmidt et al. 2008, Cem. Concr. Res. 38, 337)", () => {
 });
 
 describe("C-S-H at the portlandite-saturated end, 25 °C", () => {
-  // Bulk Ca/Si 2.5: lime enough for C-S-H of Ca/Si near 1.65 and the Ca of the saturated solution, with portlandite left.
+  // Bulk Ca/Si 2.5: lime enough for C-S-H of Ca/Si up to about 1.65 (either C-S-H model of the data) and the Ca of the
+  // saturated solution, with portlandite left.
   const r = equilibrium({ CaO: 7.0, SiO2: 3.0, H2O: 1000 }, 25);
 
   it("coexists with portlandite and a dissolved Ca within 20 % of saturated Ca(OH)2, 20.3 mmol/L (Bates, Bower & Smith 1956, J. Res. NBS 56, 305)", () => {

@@ -4,14 +4,15 @@ calories to joules with the thermochemical calorie (4.184 J) except the HKF coef
 published calorie units (lib/data/schema.ts). Every value was typed from memory of the cited source, so every
 entry carries recalledFromMemory: true; confirm against the printed tables before tightening a tolerance.
 
-Run from the repository root: /usr/bin/python3 lib/data/scripts/write-starter-data.py
+Run from the repository root: /usr/bin/python3 lib/data/scripts/write-starter-data.py [output directory]
 It runs fit-water-heat-capacity.py (IAPWS-95 via python3-iapws) and derive-carbonate-complex-constants.py.
 """
-import json, os, subprocess, sys
+import json, math, os, subprocess, sys
 
 CAL_J = 4.184
 HERE = os.path.dirname(os.path.abspath(__file__))
-OUT = os.path.join(HERE, "..", "starter")
+# An optional first argument writes elsewhere (tests/data/starter/generator.test.ts compares with the committed files).
+OUT = sys.argv[1] if len(sys.argv) > 1 else os.path.join(HERE, "..", "starter")
 DATE = "2026-12-01"
 UNITS = {"energy": "J/mol", "entropy": "J/(mol K)", "heatCapacity": "J/(mol K)", "molarVolume": "cm3/mol"}
 
@@ -159,6 +160,15 @@ def gases():
         "solutions": [],
     }
 
+NORDSTROM90 = "Nordstrom, Plummer, Langmuir, Busenberg, May, Jones & Parkhurst (1990) Revised chemical equilibrium data for major water-mineral reactions, ACS Symp. Ser. 416, 398-413"
+# ΔfG° at 25 °C (J/mol) of the ions and water a solid is placed against, as written to aqueous.json.
+ION_GIBBS_25_J = {"Ca+2": r(-132120 * CAL_J, 1), "SO4-2": r(-177930 * CAL_J, 1), "H2O(l)": -237140.0}
+
+def gibbs_from_log_ksp(products, log_ksp):
+    """ΔfG° (J/mol, 25 °C) of a solid from its solubility product by Hess's law: ΔrG° = -RT ln10 log Ksp."""
+    rt_ln10 = 8.314462618 * 298.15 * math.log(10)
+    return float(round(sum(n * ION_GIBBS_25_J[i] for i, n in products.items()) + rt_ln10 * log_ksp, 0))
+
 def solids():
     return {
         "family": "starter-solids",
@@ -183,19 +193,19 @@ def solids():
              "recalledFromMemory": True,
              "note": "Constant Cp: no Cp(T) function recalled with confidence. The NBS (1982) set (ΔfG° -898.49 kJ/mol) would lower log K(Ca(OH)2 = Ca+2 + 2OH-) by about 0.26."},
             {"id": "gypsum", "formula": "CaSO4·2H2O", "name": "gypsum", "phase": "solid",
-             "standard": {"gibbsJPerMol": -1797280.0, "enthalpyJPerMol": -2022630.0, "entropyJPerMolK": 194.1},
+             "standard": {"gibbsJPerMol": gibbs_from_log_ksp({"Ca+2": 1, "SO4-2": 1, "H2O(l)": 2}, -4.58), "enthalpyJPerMol": -2022630.0, "entropyJPerMolK": 194.1},
              "heatCapacity": maier_kelley_cal(21.84, 76.0e-3, 0.0),
              "molarVolumeCm3PerMol": 74.69,
-             "source": "ΔfG°, ΔfH°, S°: " + NBS82 + "; Cp: " + KELLEY + "; V°: " + RH95,
+             "source": "ΔfG°: from log10 Ksp = -4.58 at 25 °C (CaSO4·2H2O = Ca+2 + SO4-2 + 2 H2O; " + NORDSTROM90 + ") with this data set's Ca+2, SO4-2 and H2O by Hess's law; ΔfH°, S°: " + NBS82 + "; Cp: " + KELLEY + "; V°: " + RH95,
              "recalledFromMemory": True,
-             "note": "Maier-Kelley Cp a = 21.84 cal/(mol K), b = 76.0e-3 cal/(mol K²) (Cp(298.15 K) = 186.2 J/(mol K) vs NBS 186.0)."},
+             "note": "The NBS ΔfG° (-1797.28 kJ/mol) with the revised-HKF ions of this data set gives log Ksp -4.51, 0.07 above the evaluated -4.58, so ΔfG° was lowered by 0.39 kJ/mol to -1797.672 kJ/mol (within the 1 kJ/mol Gibbs-Helmholtz check against the NBS ΔfH° and S°). Anhydrite was placed the same way (log Ksp -4.36, same source), which keeps the gypsum-anhydrite transition where the NBS values put it. Maier-Kelley Cp a = 21.84 cal/(mol K), b = 76.0e-3 cal/(mol K²) (Cp(298.15 K) = 186.2 J/(mol K) vs NBS 186.0)."},
             {"id": "anhydrite", "formula": "CaSO4", "name": "anhydrite", "phase": "solid",
-             "standard": {"gibbsJPerMol": -1321790.0, "enthalpyJPerMol": -1434110.0, "entropyJPerMolK": 106.7},
+             "standard": {"gibbsJPerMol": gibbs_from_log_ksp({"Ca+2": 1, "SO4-2": 1}, -4.36), "enthalpyJPerMol": -1434110.0, "entropyJPerMolK": 106.7},
              "heatCapacity": maier_kelley_cal(16.78, 23.6e-3, 0.0),
              "molarVolumeCm3PerMol": 45.94,
-             "source": "ΔfG°, ΔfH°, S°: " + NBS82 + "; Cp: " + KELLEY + "; V°: " + RH95,
+             "source": "ΔfG°: from log10 Ksp = -4.36 at 25 °C (CaSO4 = Ca+2 + SO4-2; Nordstrom et al. (1990) ACS Symp. Ser. 416, 398-413) with this data set's Ca+2 and SO4-2 by Hess's law; ΔfH°, S°: " + NBS82 + "; Cp: " + KELLEY + "; V°: " + RH95,
              "recalledFromMemory": True,
-             "note": "Same source as gypsum and bassanite so that their relative stability is internally consistent. Maier-Kelley Cp a = 16.78 cal/(mol K), b = 23.6e-3 cal/(mol K²)."},
+             "note": "The NBS ΔfG° (-1321.79 kJ/mol) with this data set's ions gives log Ksp -4.30; lowered by 0.35 kJ/mol to -1322.136 kJ/mol to give the evaluated -4.36, as for gypsum (both shifts agree within 0.05 kJ/mol, so the gypsum-anhydrite balance of the NBS tables is kept). Bassanite keeps its NBS ΔfG° (metastable, no evaluated Ksp in the same source). Maier-Kelley Cp a = 16.78 cal/(mol K), b = 23.6e-3 cal/(mol K²)."},
             {"id": "bassanite", "formula": "CaSO4·0.5H2O", "name": "bassanite (beta hemihydrate)", "phase": "solid",
              "standard": {"gibbsJPerMol": -1435780.0, "enthalpyJPerMol": -1574650.0, "entropyJPerMolK": 134.3},
              "heatCapacity": {"model": "constant", "cpJPerMolK": 119.41},

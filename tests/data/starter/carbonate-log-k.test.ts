@@ -54,6 +54,12 @@ const reactions = [
  * R8-97 value used here (see born-functions.test.ts). Other permittivity fits (Malmberg & Maryott 1956,
  * J. Res. NBS 56, 1; Bradley & Pitzer 1979, J. Phys. Chem. 83, 1599; both from memory) give 0.054–0.061,
  * so the rest of the deviation lies in the ion parameters themselves.
+ *
+ * Tried and not taken (December 2026): CO3-2 from Millero's (1979, Geochim. Cosmochim. Acta 43, 1651) pure-water
+ * K2, ln K2 = 207.6548 − 11843.79/T − 33.6485 ln T (from memory; ΔrCp° −279.8 J/(mol·K)). log K2 then follows
+ * Plummer & Busenberg within 0.011 to 90 °C, but calcite = Ca+2 + CO3-2 falls 0.069 below them at 75 °C and
+ * 0.088 at 90 °C (now −0.044): the Helgeson et al. (1978) calcite was made consistent with the HKF CO3-2, so
+ * the error would only move from K2 to calcite solubility, which matters more for cement carbonation.
  */
 const knownDeviations = [{ reaction: "HCO3- = CO3-2 + H+", temperatureC: 90, observed: 0.055 }];
 

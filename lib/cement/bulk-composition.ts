@@ -5,9 +5,8 @@ import { clinkerMinorOxidesDensityGPerCm3, clinkerPhase, scmDensityGPerCm3, type
 import { partitionCementOxides, type ClinkerPartitionError } from "./clinker-partition";
 import { addOxideElementMoles, oxideIds, type OxideId, type OxideMassesG } from "./oxides";
 import { minimumWaterCementRatioForFullHydration } from "./powers-model";
-import type { ReactionDegrees } from "./reaction-degrees";
+import type { ReactionDegreeWarning, ReactionDegrees } from "./reaction-degrees";
 import type { ResolvedBinder, ResolvedScm } from "./resolve-binder";
-import type { ScmReactionWarning } from "./scm-reaction";
 
 /** Elements handed to the equilibrium calculation. Ti, P and Mn stay in the unreacted solids as inert. */
 export type BulkElement = "Ca" | "Si" | "Al" | "Fe" | "Mg" | "S" | "C" | "Na" | "K" | "Cl" | "H" | "O";
@@ -30,7 +29,7 @@ export type UnreactedSolid = {
 
 export type BulkCompositionWarning =
   | AnalysisTotalWarning
-  | ScmReactionWarning
+  | ReactionDegreeWarning
   | { code: "water_insufficient_for_full_hydration"; waterBinderRatio: number; minimumSealed: number; minimumSaturated: number }
   | { code: "loi_taken_as_co2"; material: string; loiMassPercent: number };
 

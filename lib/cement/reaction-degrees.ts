@@ -2,6 +2,19 @@ import type { ResolvedBinder } from "./resolve-binder";
 import { parrotKillohDegrees, type ClinkerReactingPhase } from "./parrot-killoh";
 import { scmReactionDegree, type ScmReactionWarning } from "./scm-reaction";
 import type { ScmType } from "./clinker-phases";
+import { minimumWaterCementRatioForFullHydration, powersMaximumDegreeOfHydration } from "./powers-model";
+
+/** Clinker phases (and kinetic SCMs) whose computed degree was held at the degree the mixing water allows (see `reactionDegreesAtAges`). */
+export type WaterLimitedClinkerWarning = {
+  code: "clinker_reaction_limited_by_water";
+  waterBinderRatio: number;
+  minimumSealed: number;
+  maximumDegree: number;
+  phases: { phase: ClinkerReactingPhase; unlimitedDegree: number }[];
+  supplementaryMaterials: { type: ScmType; unlimitedDegree: number }[];
+};
+
+export type ReactionDegreeWarning = ScmReactionWarning | WaterLimitedClinkerWarning;
 
 /** Degrees of reaction (0–1) of the clinker phases and of the reactive part of each SCM at one age. */
 export type ReactionDegrees = {
@@ -9,7 +22,7 @@ export type ReactionDegrees = {
   scm: Partial<Record<ScmType, number>>;
   /** Absolute uncertainty of each SCM degree (about one standard deviation); zero for entered degrees. */
   scmUncertaintyAbsolute: Partial<Record<ScmType, number>>;
-  warnings: ScmReactionWarning[];
+  warnings: ReactionDegreeWarning[];
 };
 
 /**
@@ -17,6 +30,14 @@ export type ReactionDegrees = {
  * the clinker phases, with the water/binder ratio standing for w/c (the PK water factor is a space limit, and
  * the SCM hydrates share that space; an assumption of this model) and the Blaine fineness of the Portland part;
  * the published curves of `scm-reaction.ts` for each SCM. One PK integration serves all ages.
+ *
+ * Water limit: the equilibrium is a closed system holding only the mixing water, and Powers' model (Powers &
+ * Brownyard 1947, in the form of Jensen & Hansen 2001, Cem. Concr. Res. 31, 647) says a sealed paste can hydrate only to
+ * α_max = (w/c)/(w/c)_min,sealed ≈ (w/c)/0.42 before its capillary water is used up. PK's own water factor allows
+ * more at low w/c (alite to H·w/c + 0.3 = 0.75 at w/c 0.25), which left the equilibrium with almost no pore
+ * solution. Each clinker phase is therefore held at α_max, a simplification (the phases do not run dry at the same
+ * overall degree), and a warning names the phases held. The reactive part of a slag, fly ash, silica fume or calcined
+ * clay is held at the same α_max, as its hydrates share the water (the assumption behind w/b standing for w/c above).
  */
 export function reactionDegreesAtAges(binder: ResolvedBinder, agesDays: readonly number[], curingTemperatureC: number): ReactionDegrees[] {
   const clinkerSeries = parrotKillohDegrees(agesDays, {
@@ -24,23 +45,37 @@ export function reactionDegreesAtAges(binder: ResolvedBinder, agesDays: readonly
     blaineM2PerKg: binder.cement.blaineM2PerKg,
     curingTemperatureC,
   });
+  const waterBinderRatio = binder.mix.waterBinderRatio;
+  const maximumDegree = powersMaximumDegreeOfHydration(waterBinderRatio, "sealed");
+  const phases: ClinkerReactingPhase[] = ["alite", "belite", "aluminate", "ferrite"];
   return agesDays.map((ageDays, index) => {
     const scm: Partial<Record<ScmType, number>> = {};
     const scmUncertaintyAbsolute: Partial<Record<ScmType, number>> = {};
-    const warnings: ScmReactionWarning[] = [];
+    const warnings: ReactionDegreeWarning[] = [];
+    const heldScm: { type: ScmType; unlimitedDegree: number }[] = [];
     for (const material of binder.supplementaryMaterials) {
       const degree = scmReactionDegree(material.type, ageDays, curingTemperatureC);
-      scm[material.type] = degree.degree;
+      // Only kinetic SCM degrees are held: limestone enters the equilibrium whole (its degree is 1 by definition).
+      const limited = degree.model === "table" && degree.degree > maximumDegree;
+      if (limited) heldScm.push({ type: material.type, unlimitedDegree: degree.degree });
+      scm[material.type] = limited ? maximumDegree : degree.degree;
       scmUncertaintyAbsolute[material.type] = degree.uncertaintyAbsolute;
       warnings.push(...degree.warnings);
     }
+    const held = phases.filter((phase) => clinkerSeries[phase][index] > maximumDegree);
+    if (held.length > 0 || heldScm.length > 0) {
+      warnings.push({
+        code: "clinker_reaction_limited_by_water",
+        waterBinderRatio,
+        minimumSealed: minimumWaterCementRatioForFullHydration("sealed"),
+        maximumDegree,
+        phases: held.map((phase) => ({ phase, unlimitedDegree: clinkerSeries[phase][index] })),
+        supplementaryMaterials: heldScm,
+      });
+    }
+    const clinker = Object.fromEntries(phases.map((phase) => [phase, Math.min(clinkerSeries[phase][index], maximumDegree)])) as Record<ClinkerReactingPhase, number>;
     return {
-      clinker: {
-        alite: clinkerSeries.alite[index],
-        belite: clinkerSeries.belite[index],
-        aluminate: clinkerSeries.aluminate[index],
-        ferrite: clinkerSeries.ferrite[index],
-      },
+      clinker,
       scm,
       scmUncertaintyAbsolute,
       warnings,

@@ -18,6 +18,7 @@ export function computationNotesOf(result: unknown): string[] {
 const num = (value: unknown, digits = 3) => (typeof value === "number" && Number.isFinite(value) ? String(Number(value.toPrecision(digits))) : "?");
 const text = (value: unknown, fallback = "?") => (typeof value === "string" && value ? value : fallback);
 const lowerFirst = (value: string) => value.charAt(0).toLowerCase() + value.slice(1);
+const listOf = (items: string[]) => (items.length < 2 ? items.join("") : `${items.slice(0, -1).join(", ")} and ${items[items.length - 1]}`);
 const sentence = (value: string) => value.charAt(0).toUpperCase() + value.slice(1) + (/[.!?]$/.test(value) ? "" : ".");
 
 function noteOf(w: Record<string, unknown>): string {
@@ -32,6 +33,13 @@ function noteOf(w: Record<string, unknown>): string {
       return `The loss on ignition of the ${text(w.material)} (${num(w.loiMassPercent)} %) is taken as CO2 (calcite), as no CO2 was given.`;
     case "water_insufficient_for_full_hydration":
       return `The w/b ${num(w.waterBinderRatio)} is below the ${num(w.minimumSaturated)} (water-cured) to ${num(w.minimumSealed)} (sealed) that full hydration needs (Powers' model): the paste self-desiccates and part of the binder stays unreacted.`;
+    case "clinker_reaction_limited_by_water": {
+      const held = [
+        ...(Array.isArray(w.phases) ? w.phases : []).map((p: { phase?: unknown; unlimitedDegree?: unknown }) => `${text(p.phase)} (computed ${num(p.unlimitedDegree, 2)})`),
+        ...(Array.isArray(w.supplementaryMaterials) ? w.supplementaryMaterials : []).map((m: { type?: unknown; unlimitedDegree?: unknown }) => `the ${text(m.type)} (computed ${num(m.unlimitedDegree, 2)})`),
+      ];
+      return `Hydration is limited by the mixing water: at w/b ${num(w.waterBinderRatio)} a sealed paste can react only to a degree of about ${num(w.maximumDegree, 2)} (w/b ÷ ${num(w.minimumSealed, 2)}, Powers' model) before its capillary water is used up, so ${listOf(held)} ${held.length === 1 ? "is" : "are"} held at ${num(w.maximumDegree, 2)}.`;
+    }
     case "ionic_strength_beyond_activity_model":
       return `The pore solution's ionic strength, ${num(w.ionicStrengthMolPerKg)} mol/kg, is above the ${num(w.validUpToMolPerKg)} mol/kg to which the extended Debye–Hückel activity model is used with confidence: dissolved concentrations and pH are less certain.`;
     case "scm_model_extrapolated":

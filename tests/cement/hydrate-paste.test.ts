@@ -9,6 +9,8 @@ import cementPresets from "../../lib/data/binders/cement-presets.json";
 import { expectReference } from "../support/reference-check";
 import { expectEquilibriumInvariants } from "../equilibrium/invariants";
 import { defaultSuppressedPhases } from "../../lib/data/kinetic-constraints";
+import { parrotKillohDegrees } from "../../lib/cement/parrot-killoh";
+import { scmReactionDegree } from "../../lib/cement/scm-reaction";
 
 const fullReaction = { mode: "degrees", clinkerDegrees: { alite: 1, belite: 1, aluminate: 1, ferrite: 1 } } as const;
 const cemI = { kind: "preset", presetId: "en197-cem-i" } as const;
@@ -210,15 +212,21 @@ describe("hydratePaste: inputs", () => {
 });
 
 describe("hydratePaste: a nearly dry paste", () => {
-  // CEM I with 25 % slag (the typical presets), w/b 0.25, 10 years at 20 °C: self-desiccated, a few mg of pore solution
-  // per 100 g binder beside nine solids (Powers: below about 0.42 a sealed paste runs out of water; common practice).
-  // The phase search cycled between monosulfate-12 and -14 (a pair related by water alone, which sets the water
-  // activity here) and failed; the engine now retries with such pairs allowed from the first addition.
+  // CEM I with 25 % slag (the typical presets), w/b 0.25, at the degrees Parrot–Killoh and the slag curve give for
+  // 10 years at 20 °C without the water limit (entered as degrees, which are not limited): self-desiccated, a few mg
+  // of pore solution per 100 g binder beside nine solids (Powers: below about 0.42 a sealed paste runs out of water;
+  // common practice). The phase search cycled between monosulfate-12 and -14 (a pair related by water alone, which
+  // sets the water activity here) and failed; the engine now retries with such pairs allowed from the first addition.
+  const slag = { type: "slag", massPercentOfBinder: 25, composition: { kind: "preset", presetId: "slag-typical" } } as const;
+  const mix = { waterBinderRatio: 0.25, binderContentKgPerM3: 360 };
+  const blaineM2PerKg = cementPresets.presets.find((p) => p.id === "en197-cem-i")!.cement.blaineM2PerKg;
+  const unlimited = parrotKillohDegrees([3650], { waterCementRatio: 0.25, blaineM2PerKg, curingTemperatureC: 20 });
+  const clinkerDegrees = { alite: unlimited.alite[0], belite: unlimited.belite[0], aluminate: unlimited.aluminate[0], ferrite: unlimited.ferrite[0] };
   const system = binderSystemFromInput({
     cement: cemI,
-    supplementaryMaterials: [{ type: "slag", massPercentOfBinder: 25, composition: { kind: "preset", presetId: "slag-typical" } }],
-    mix: { waterBinderRatio: 0.25, binderContentKgPerM3: 360 },
-    age: { mode: "age", ageDays: 3650, curingTemperatureC: 20 },
+    supplementaryMaterials: [slag],
+    mix,
+    age: { mode: "degrees", clinkerDegrees, scmDegrees: { slag: scmReactionDegree("slag", 3650, 20).degree } },
   });
   if (!system.ok) throw new Error(JSON.stringify(system.error));
 
@@ -229,5 +237,16 @@ describe("hydratePaste: a nearly dry paste", () => {
     expect(assemblage.solution!.waterKg).toBeLessThan(1e-3);
     expect(assemblage.phases.map((p) => p.id)).toEqual(expect.arrayContaining(["portlandite", "csh", "ettringite"]));
     expectEquilibriumInvariants(assemblage, defaultSuppressedPhases(20));
+  });
+
+  it("keeps pore solution when the age is given, as the clinker is held at the degree the water allows (Powers' model)", () => {
+    const byAge = binderSystemFromInput({ cement: cemI, supplementaryMaterials: [slag], mix, age: { mode: "age", ageDays: 3650, curingTemperatureC: 20 } });
+    if (!byAge.ok) throw new Error(JSON.stringify(byAge.error));
+    expect(byAge.value.composition.warnings.map((w) => w.code)).toContain("clinker_reaction_limited_by_water");
+    const result = hydratePaste(byAge.value.composition, { temperatureC: 20, binderContentKgPerM3: 360 });
+    if (!result.ok) throw new Error(JSON.stringify(result.error));
+    // 25 g of mixing water per 100 g binder: 3.1 g stays in the pores with the limit, 5 mg without it (the case above).
+    expect(result.value.assemblage.solution!.waterKg).toBeGreaterThan(2.5e-3);
+    expectEquilibriumInvariants(result.value.assemblage, defaultSuppressedPhases(20));
   });
 });

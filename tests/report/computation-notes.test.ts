@@ -12,6 +12,7 @@ describe("computation notes", () => {
         { code: "analysis_total_out_of_range", material: "cement", totalMassPercent: 95.4, minMassPercent: 97, maxMassPercent: 101 },
         { code: "scm_model_extrapolated", type: "slag", reason: "temperature_outside_data", curingTemperatureC: 80, minC: 5, maxC: 60 },
         { code: "near_invariant_point", message: "the assemblage lies near an invariant point" },
+        { code: "clinker_reaction_limited_by_water", waterBinderRatio: 0.25, minimumSealed: 0.4195, maximumDegree: 0.596, phases: [{ phase: "alite", unlimitedDegree: 0.7512 }], supplementaryMaterials: [{ type: "slag", unlimitedDegree: 0.71 }] },
         { code: "something_new" },
       ],
     });
@@ -23,6 +24,7 @@ describe("computation notes", () => {
       "The cement analysis sums to 95.4 %, outside 97–101 %: check it.",
       "The reaction degree of the slag is extrapolated: the curing temperature 80 °C lies outside the 5–60 °C of its data.",
       "The assemblage lies near an invariant point.",
+      "Hydration is limited by the mixing water: at w/b 0.25 a sealed paste can react only to a degree of about 0.6 (w/b ÷ 0.42, Powers' model) before its capillary water is used up, so alite (computed 0.75) and the slag (computed 0.71) are held at 0.6.",
       "Note: something_new.",
     ]);
   });

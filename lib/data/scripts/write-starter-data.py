@@ -7,7 +7,7 @@ entry carries recalledFromMemory: true; confirm against the printed tables befor
 Run from the repository root: /usr/bin/python3 lib/data/scripts/write-starter-data.py [output directory]
 It runs fit-water-heat-capacity.py (IAPWS-95 via python3-iapws) and derive-carbonate-complex-constants.py.
 """
-import json, math, os, subprocess, sys
+import functools, json, math, os, subprocess, sys
 
 CAL_J = 4.184
 HERE = os.path.dirname(os.path.abspath(__file__))
@@ -36,6 +36,7 @@ def hkf_ion(id_, name, g_cal, h_cal, s_cal, c1, c2, omega, source, note=""):
         "note": (f"Published in calories: ΔfG° {g_cal} cal/mol, ΔfH° {h_cal} cal/mol, S° {s_cal} cal/(mol K); converted with 4.184 J/cal. " + note).strip(),
     }
 
+@functools.lru_cache(maxsize=None)  # solids() places gypsum and anhydrite on these ions: build once
 def aqueous():
     water_cp = run("fit-water-heat-capacity.py")
     complexes = run("derive-carbonate-complex-constants.py")
@@ -161,13 +162,15 @@ def gases():
     }
 
 NORDSTROM90 = "Nordstrom, Plummer, Langmuir, Busenberg, May, Jones & Parkhurst (1990) Revised chemical equilibrium data for major water-mineral reactions, ACS Symp. Ser. 416, 398-413"
-# ΔfG° at 25 °C (J/mol) of the ions and water a solid is placed against, as written to aqueous.json.
-ION_GIBBS_25_J = {"Ca+2": r(-132120 * CAL_J, 1), "SO4-2": r(-177930 * CAL_J, 1), "H2O(l)": -237140.0}
+GAS_CONSTANT_J_PER_MOL_K = 8.314462618  # CODATA 2018
+REFERENCE_TEMPERATURE_K = 298.15
 
 def gibbs_from_log_ksp(products, log_ksp):
-    """ΔfG° (J/mol, 25 °C) of a solid from its solubility product by Hess's law: ΔrG° = -RT ln10 log Ksp."""
-    rt_ln10 = 8.314462618 * 298.15 * math.log(10)
-    return float(round(sum(n * ION_GIBBS_25_J[i] for i, n in products.items()) + rt_ln10 * log_ksp, 0))
+    """ΔfG° (J/mol, 25 °C) of a solid from its solubility product by Hess's law, ΔrG° = -RT ln10 log Ksp, with the
+    ΔfG° of the ions and water exactly as aqueous() writes them."""
+    gibbs_j = {s["id"]: s["standard"]["gibbsJPerMol"] for s in aqueous()["species"] if "standard" in s}
+    rt_ln10 = GAS_CONSTANT_J_PER_MOL_K * REFERENCE_TEMPERATURE_K * math.log(10)
+    return float(round(sum(n * gibbs_j[i] for i, n in products.items()) + rt_ln10 * log_ksp, 0))
 
 def solids():
     return {

@@ -1,5 +1,5 @@
 import type { ResolvedBinder } from "./resolve-binder";
-import { parrotKillohDegrees, type ClinkerReactingPhase } from "./parrot-killoh";
+import { clinkerReactingPhases, parrotKillohDegrees, type ClinkerReactingPhase } from "./parrot-killoh";
 import { scmReactionDegree, type ScmReactionWarning } from "./scm-reaction";
 import type { ScmType } from "./clinker-phases";
 import { minimumWaterCementRatioForFullHydration, powersMaximumDegreeOfHydration } from "./powers-model";
@@ -47,7 +47,7 @@ export function reactionDegreesAtAges(binder: ResolvedBinder, agesDays: readonly
   });
   const waterBinderRatio = binder.mix.waterBinderRatio;
   const maximumDegree = powersMaximumDegreeOfHydration(waterBinderRatio, "sealed");
-  const phases: ClinkerReactingPhase[] = ["alite", "belite", "aluminate", "ferrite"];
+  const minimumSealed = minimumWaterCementRatioForFullHydration("sealed");
   return agesDays.map((ageDays, index) => {
     const scm: Partial<Record<ScmType, number>> = {};
     const scmUncertaintyAbsolute: Partial<Record<ScmType, number>> = {};
@@ -62,18 +62,18 @@ export function reactionDegreesAtAges(binder: ResolvedBinder, agesDays: readonly
       scmUncertaintyAbsolute[material.type] = degree.uncertaintyAbsolute;
       warnings.push(...degree.warnings);
     }
-    const held = phases.filter((phase) => clinkerSeries[phase][index] > maximumDegree);
+    const held = clinkerReactingPhases.filter((phase) => clinkerSeries[phase][index] > maximumDegree);
     if (held.length > 0 || heldScm.length > 0) {
       warnings.push({
         code: "clinker_reaction_limited_by_water",
         waterBinderRatio,
-        minimumSealed: minimumWaterCementRatioForFullHydration("sealed"),
+        minimumSealed,
         maximumDegree,
         phases: held.map((phase) => ({ phase, unlimitedDegree: clinkerSeries[phase][index] })),
         supplementaryMaterials: heldScm,
       });
     }
-    const clinker = Object.fromEntries(phases.map((phase) => [phase, Math.min(clinkerSeries[phase][index], maximumDegree)])) as Record<ClinkerReactingPhase, number>;
+    const clinker = Object.fromEntries(clinkerReactingPhases.map((phase) => [phase, Math.min(clinkerSeries[phase][index], maximumDegree)])) as Record<ClinkerReactingPhase, number>;
     return {
       clinker,
       scm,

@@ -106,17 +106,20 @@ export function minimise(p: EquilibriumProblem, options: MinimiseOptions = {}): 
   const cold = run(p, cloneState(start.value), newtonOptions, options, deadline, started, limitMs);
   if (cold.ok || cold.error.code !== "no_convergence") return cold.ok ? { ok: true, value: { ...cold.value, warmStarted: false } } : cold;
   // Near an invariant point the phase search can cycle from the LP's phase set. Start again from the
-  // solution alone (the LP's element potentials) so that solids enter one at a time by saturation index.
+  // solution alone (the LP's element potentials) so that solids enter one at a time by saturation index. Not
+  // possible when the LP left the solution out (it put all the water into hydrates, as for a nearly dry paste); the
+  // retries after this one still run then, each adding the solution back by its saturation index.
   const solutionOnly = cloneState(start.value);
-  if (p.aqueous < 0 || !solutionOnly.active[p.aqueous]) return cold;
-  p.phases.forEach((phase, k) => {
-    if (phase.kind !== "aqueous" && phase.kind !== "reservoir") {
-      solutionOnly.active[k] = 0;
-      solutionOnly.amount[k] = 0;
-    }
-  });
-  const retry = run(p, solutionOnly, newtonOptions, options, deadline, started, limitMs);
-  if (retry.ok) return { ok: true, value: { ...retry.value, warmStarted: false } };
+  if (p.aqueous >= 0 && solutionOnly.active[p.aqueous]) {
+    p.phases.forEach((phase, k) => {
+      if (phase.kind !== "aqueous" && phase.kind !== "reservoir") {
+        solutionOnly.active[k] = 0;
+        solutionOnly.amount[k] = 0;
+      }
+    });
+    const retry = run(p, solutionOnly, newtonOptions, options, deadline, started, limitMs);
+    if (retry.ok) return { ok: true, value: { ...retry.value, warmStarted: false } };
+  }
   // Then let solids related by water alone coexist with the solution (gypsum + anhydrite in a brine).
   // Not tried earlier: in hydrated cement the AFm hydrates make such pairs near-degenerate.
   const withWaterPairs = run(p, cloneState(start.value), newtonOptions, options, deadline, started, limitMs, "after-cycling");

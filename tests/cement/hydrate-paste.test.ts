@@ -96,8 +96,7 @@ describe("hydratePaste: volumes", () => {
     // At w/c 0.5 the pore solution more than fills the gel pores, so their full capacity applies (hand calculation):
     // the particle is the C-S-H volume less the gel water its end-members hold (gel-pores.json, solidParticleWaterPerSilicon).
     const cshVolume = p.phases.filter((x) => x.id === "csh").reduce((s, x) => s + x.volumeCm3, 0);
-    // Zero for the default end-members, which hold the particle's water only (the line is drawn through them).
-    expect(gelWaterInCshCm3).toBeGreaterThanOrEqual(0);
+    expect(gelWaterInCshCm3).toBeGreaterThan(0);
     expect(gelWaterInCshCm3).toBeLessThan(0.28 * cshVolume);
     expect(gelPoreVolumeCm3).toBeCloseTo((0.28 / 0.72) * (cshVolume - gelWaterInCshCm3), 10);
     expect(gelPoreVolumeCm3 - gelWaterInCshCm3).toBeLessThan(poreSolutionVolumeCm3);
@@ -170,7 +169,7 @@ describe("hydratePaste: blended binders follow the published trends", () => {
     for (const [type, share, degree] of [["slag", 60, 0.8], ["siliceous-fly-ash", 40, 0.8]] as const) {
       const b = blended(type, share, degree);
       expect(grams(b, "portlandite"), type).toBe(0);
-      expect(caSiOfCsh(b), type).toBeLessThan(caSiOfCsh(plain) - 0.02);
+      expect(caSiOfCsh(b), type).toBeLessThan(caSiOfCsh(plain) - 0.1);
     }
   });
 
@@ -213,10 +212,10 @@ describe("hydratePaste: inputs", () => {
 
 describe("hydratePaste: a nearly dry paste", () => {
   // CEM I with 25 % slag (the typical presets), w/b 0.25, at the degrees Parrot–Killoh and the slag curve give for
-  // 10 years at 20 °C without the water limit (entered as degrees, which are not limited): self-desiccated, a few mg
-  // of pore solution per 100 g binder beside nine solids (Powers: below about 0.42 a sealed paste runs out of water;
-  // common practice). The phase search cycled between monosulfate-12 and -14 (a pair related by water alone, which
-  // sets the water activity here) and failed; the engine now retries with such pairs allowed from the first addition.
+  // 10 years at 20 °C without the water limit (entered as degrees, which are not limited): self-desiccated, well under
+  // a milligram of pore solution per 100 g binder beside nine solids (Powers: below about 0.42 a sealed paste runs out
+  // of water; common practice). The phase search once cycled between AFm hydrates related by water alone, which set
+  // the water activity here; the engine retries with such pairs allowed beside the solution.
   const slag = { type: "slag", massPercentOfBinder: 25, composition: { kind: "preset", presetId: "slag-typical" } } as const;
   const mix = { waterBinderRatio: 0.25, binderContentKgPerM3: 360 };
   const blaineM2PerKg = cementPresets.presets.find((p) => p.id === "en197-cem-i")!.cement.blaineM2PerKg;
@@ -239,14 +238,25 @@ describe("hydratePaste: a nearly dry paste", () => {
     expectEquilibriumInvariants(assemblage, defaultSuppressedPhases(20));
   });
 
-  it("keeps pore solution when the age is given, as the clinker is held at the degree the water allows (Powers' model)", () => {
+  it("keeps the pore solution at a self-desiccation water activity when the age is given, as the clinker is held at the degree the water allows (Powers' model)", () => {
     const byAge = binderSystemFromInput({ cement: cemI, supplementaryMaterials: [slag], mix, age: { mode: "age", ageDays: 3650, curingTemperatureC: 20 } });
     if (!byAge.ok) throw new Error(JSON.stringify(byAge.error));
     expect(byAge.value.composition.warnings.map((w) => w.code)).toContain("clinker_reaction_limited_by_water");
     const result = hydratePaste(byAge.value.composition, { temperatureC: 20, binderContentKgPerM3: 360 });
     if (!result.ok) throw new Error(JSON.stringify(result.error));
-    // 25 g of mixing water per 100 g binder: 3.1 g stays in the pores with the limit, 5 mg without it (the case above).
-    expect(result.value.assemblage.solution!.waterKg).toBeGreaterThan(2.5e-3);
+    const unlimitedResult = hydratePaste(system.value.composition, { temperatureC: 20, binderContentKgPerM3: 360 });
+    if (!unlimitedResult.ok) throw new Error(JSON.stringify(unlimitedResult.error));
+    // Sealed pastes of w/c 0.25–0.3 self-desiccate to an internal relative humidity of about 75–90 % and stay there
+    // (Jensen & Hansen 2001, Cem. Concr. Res. 31, 647, and the sealed-paste measurements they review; from memory). With
+    // the limit the solution's water activity, fixed by the AFm and AFt solids beside it, is 0.89; without it, 0.41.
+    const waterActivity = result.value.assemblage.solution!.waterActivity;
+    expect(waterActivity).toBeGreaterThan(0.75);
+    expect(waterActivity).toBeLessThan(0.95);
+    expect(unlimitedResult.value.assemblage.solution!.waterActivity).toBeLessThan(0.6);
+    // Powers' limit leaves the gel water: here the C-S-H end-members hold it (4.1 cm³ per 100 g binder) beside a few mg
+    // of free solution.
+    const { poreSolutionVolumeCm3, gelWaterInCshCm3 } = result.value.porosity;
+    expect(poreSolutionVolumeCm3 + gelWaterInCshCm3).toBeGreaterThan(2.5);
     expectEquilibriumInvariants(result.value.assemblage, defaultSuppressedPhases(20));
   });
 });

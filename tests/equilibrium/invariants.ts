@@ -1,5 +1,5 @@
 import { expect } from "vitest";
-import { loadDataset, type Dataset } from "../../lib/data/load-dataset";
+import { loadDataset } from "../../lib/data/load-dataset";
 import { speciesAtTemperature } from "../../lib/data/species-at-temperature";
 import { GAS_CONSTANT_J_PER_MOL_K } from "../../lib/equilibrium/problem";
 import type { EquilibriumResult } from "../../lib/equilibrium/result";
@@ -8,10 +8,9 @@ import type { EquilibriumResult } from "../../lib/equilibrium/result";
  * Physical invariants every converged equilibrium must satisfy (the checks a careful thermodynamic
  * library applies to every solver case): element balance, saturation indices of stable (0) and absent
  * (≤ 0) phases, and the chemical potential of every present species equal to the sum of its element
- * potentials, μ_i = μ°_i + RT ln a_i = Σ_j a_ij μ_j. The μ° come from `data` when given (a result computed on
- * another data set), else from the default data set.
+ * potentials, μ_i = μ°_i + RT ln a_i = Σ_j a_ij μ_j.
  */
-export function expectEquilibriumInvariants(result: EquilibriumResult, suppressed: string[] = [], data?: Dataset): void {
+export function expectEquilibriumInvariants(result: EquilibriumResult, suppressed: string[] = []): void {
   expect(result.massBalanceResidual).toBeLessThanOrEqual(1e-10);
   const stable = new Set(result.phases.map((p) => p.id));
   for (const [id, si] of Object.entries(result.saturationIndices)) {
@@ -19,7 +18,7 @@ export function expectEquilibriumInvariants(result: EquilibriumResult, suppresse
     // Near an invariant point the engine says so and allows 0.01 (NEAR_INVARIANT_TOLERANCE_LOG10).
     else if (!suppressed.includes(id)) expect(si, `SI of absent ${id}`).toBeLessThanOrEqual(result.nearInvariant ? 0.01 : 1e-6);
   }
-  const dataset = data ? { ok: true as const, value: data } : loadDataset();
+  const dataset = loadDataset();
   if (!dataset.ok) throw new Error(dataset.error.message);
   const temperatureK = result.temperatureC + 273.15;
   const rt = GAS_CONSTANT_J_PER_MOL_K * temperatureK;

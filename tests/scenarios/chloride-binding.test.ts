@@ -122,6 +122,7 @@ describe("sea-water exposure", () => {
       }, 0);
     const first = sea.sweep.points[0];
     const last = sea.sweep.points[sea.sweep.points.length - 1];
+    expect(last.phaseVolumesCm3["brucite"] ?? 0).toBeGreaterThan(0);
     expect(magnesiumInSolids(last)).toBeGreaterThan(magnesiumInSolids(first));
   });
 });

@@ -63,7 +63,7 @@ const PHASE_LABELS: Readonly<Record<string, string>> = {
 /** Unreacted supplementary material, `unreacted-<scm type>` (lib/cement/bulk-composition.ts): `unreacted-fly-ash` → "Unreacted fly ash". */
 const UNREACTED_SCM = /^unreacted-([a-z]+(?:-[a-z]+)*)$/;
 
-/** End-members of the C-S-H and M-S-H solid solutions, named by their molar Ca/Si or Mg/Si (`csh-ca1.67-si1`). */
+/** End-members of the C-S-H and M-S-H solid solutions, named by their Ca (or Mg) and Si per formula unit (`csh-ca1.5-si0.6667`: Ca/Si 2.25). */
 const END_MEMBER = /^(csh|msh)-(ca|mg)(\d+(?:\.\d+)?)-si(\d+(?:\.\d+)?)$/;
 
 /** The readable name of a phase id (`csh` → "C-S-H"); an id without one is returned as it is. */

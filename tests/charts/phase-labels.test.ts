@@ -29,6 +29,8 @@ describe("readable phase names", () => {
     expect(phaseLabel("csh-ca1.67-si1")).toBe("C-S-H end-member (Ca/Si 1.67)");
     expect(phaseLabel("msh-mg1.5-si1")).toBe("M-S-H end-member (Mg/Si 1.5)");
     expect(phaseLabel("csh-ca1-si2")).toBe("C-S-H end-member (Ca/Si 0.5)");
+    // An end-member of the default C-S-H (lib/data/cement/csh.json): 1.5 Ca per 0.6667 Si.
+    expect(phaseLabel("csh-ca1.5-si0.6667")).toBe("C-S-H end-member (Ca/Si 2.25)");
   });
 
   it("names the unreacted binder of the hydration timeline and the liquid (mineral names of the clinker phases, common practice)", () => {

@@ -101,15 +101,18 @@ describe("the ettringite stability temperature of this mix", () => {
   it("lies above the 65–75 °C reported for Portland pastes: KNOWN DEVIATION (pinned, not tuned)", () => {
     // Published: ettringite decomposes in Portland pastes above about 65–75 °C (Lothenbach et al. 2007, Cem. Concr. Res.
     // 37, 483; Taylor, Famy & Scrivener 2001, Cem. Concr. Res. 31, 683; range as recalled, from memory).
-    // KNOWN DEVIATION: the engine gives about 89 °C. Reasons (tests/data/ettringite-temperature.test.ts): above 50 °C
-    // siliceous hydrogarnet takes the Al the AFm phases would hold, leaving ettringite the only solid sulfate host,
-    // and sulfate uptake by C-S-H is not modelled. (The data's 1.3 log10 units of ettringite log Ksp error at 85 °C
-    // come from the Cp of Al(OH)4-, which cancels between Al solids.) This test pins the value (±1.5 °C) so a change
-    // of data or engine shows up; it is NOT evidence of agreement with the published range.
+    // KNOWN DEVIATION: the engine gives 89.4 °C (89.9 with the earlier two-end-member C-S-H). Reasons
+    // (tests/data/ettringite-temperature.test.ts): above 50 °C siliceous hydrogarnet takes the Al the AFm phases would
+    // hold, leaving ettringite the only solid sulfate host, and sulfate uptake by C-S-H is not modelled. (The data's 1.3 log10 units of ettringite log Ksp error at 85 °C
+    // come from the Cp of Al(OH)4-, which cancels between Al solids.) The limit is sensitive to the Al host and the
+    // alkalis: with the hydrogarnets suppressed this paste keeps ettringite beside monosulfate-12 to 92.5 °C, while the
+    // fully hydrated composition of tests/data/ettringite-temperature.test.ts, equilibrated without alkali uptake by
+    // C-S-H (1.2 mol/kg K in solution), has lost it by 50 °C; the published range lies between. This test pins the
+    // value (±1.5 °C) so a change of data or engine shows up; it is NOT evidence of agreement with the published range.
     expect(result.summary.ettringiteStabilityTemperatureC).not.toBeNull();
     const t = result.summary.ettringiteStabilityTemperatureC!;
     expect(t).toBeGreaterThan(75);
-    expect(Math.abs(t - 89.9)).toBeLessThan(1.5);
+    expect(Math.abs(t - 89.4)).toBeLessThan(1.5);
   });
 });
 

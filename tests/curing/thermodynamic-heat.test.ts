@@ -263,21 +263,20 @@ describe("thermodynamic heat of hydration: pure phases against calorimetric heat
 describe("thermodynamic heat of hydration: ordinary Portland cement (issue 6 acceptance)", () => {
   // KNOWN DEVIATION (audited 2026-12-01, not tuned). Target: 450–520 J/g for a fully hydrated ordinary Portland
   // cement (Taylor 1997; Lerch & Bogue 1934), and the per-phase sums 481 J/g (Taylor set) and 470 J/g (Lerch &
-  // Bogue set) for this preset. The CEM I preset gave 543.5 J/g at 25 °C with the earlier two-end-member C-S-H and
-  // gives 537.2 J/g with the four-end-member C-S-H of Kulik (2011), the default since 2026-12-02 (alite 538, belite
-  // 265 J/g alone). Decomposition of the earlier 543.5 J/g (not redone), J per g cement
-  // (tests/curing/fixtures/heat-decomposition.ts): the increment of each clinker phase averaged over the 24 orders
-  // of adding the four phases (increments are not additive otherwise), with the MgO held in the clinker (1.8 %,
-  // reacting with the clinker) split off at its periclase → brucite heat, 920 J/g:
-  //   alite      304 (553 J/g C3S)   Taylor 284 (517)   excess +20
-  //   belite      50 (295 J/g C2S)   Taylor  45 (262)   excess  +6
+  // Bogue set) for this preset. The CEM I preset gives 537.2 J/g at 25 °C with the four-end-member C-S-H of Kulik
+  // (2011), the default since 2026-12-02 (543.5 J/g with the earlier two-end-member C-S-H). Decomposition, J per g
+  // cement (tests/curing/fixtures/heat-decomposition.ts, rerun 2026-12-02): the increment of each clinker phase
+  // averaged over the 24 orders of adding the four phases (increments are not additive otherwise), with the MgO held
+  // in the clinker (1.8 %, reacting with the clinker) split off at its periclase → brucite heat, 920 J/g:
+  //   alite      299 (545 J/g C3S)   Taylor 284 (517)   excess +15
+  //   belite      48 (285 J/g C2S)   Taylor  45 (262)   excess  +3
   //   aluminate   90 with the sulfate and calcite it binds;  Taylor 88 (1144, AFm route)  +2
-  //   ferrite     69 (755 J/g C4AF)  Taylor  38 (418)   excess +31
+  //   ferrite     69 (757 J/g C4AF)  Taylor  38 (418)   excess +31
   //   free lime, sulfate dissolution, calcite (no clinker reacted) 14; Taylor CaO 12     +2
   //   MgO         17                 Taylor  15 (841)   excess  +2
-  // Half the excess is the ferrite (see the ferrite comment above: the classic ferrite heat is not reproducible
-  // by Hess's law from the tabulated ΔfH° of C4AF) and a third the alite (C3S 546 J/g alone against 500–517:
-  // 7 kJ/mol on a 118 kJ/mol reaction heat, within the uncertainty of ΔfH° of C3S and of the C-S-H end-members).
+  // Over half the excess is the ferrite (see the ferrite comment above: the classic ferrite heat is not reproducible
+  // by Hess's law from the tabulated ΔfH° of C4AF) and a quarter the alite (C3S 538 J/g alone against 500–517:
+  // 5 kJ/mol on a 118 kJ/mol reaction heat, within the uncertainty of ΔfH° of C3S and of the C-S-H end-members).
   // No bookkeeping error was found: water (mixing + LOI) cancels against the pore solution and hydrate water by
   // element balance, both sides are at 25 °C, and the calcium sulfate is counted as the partition gives it
   // (anhydrite + LOI water as liquid: 4 J/g more than gypsum would give).

@@ -108,7 +108,8 @@ export function minimise(p: EquilibriumProblem, options: MinimiseOptions = {}): 
   // Near an invariant point the phase search can cycle from the LP's phase set. Start again from the
   // solution alone (the LP's element potentials) so that solids enter one at a time by saturation index. Not
   // possible when the LP left the solution out (it put all the water into hydrates, as for a nearly dry paste); the
-  // retries after this one still run then, each adding the solution back by its saturation index.
+  // retries after this one still run then, each adding the solution back when the search needs it (an element only
+  // the solution can carry, or its saturation index).
   const solutionOnly = cloneState(start.value);
   if (p.aqueous >= 0 && solutionOnly.active[p.aqueous]) {
     p.phases.forEach((phase, k) => {

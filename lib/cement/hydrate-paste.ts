@@ -28,7 +28,8 @@ export type HydrationWarning =
   | BulkCompositionWarning
   | { code: "ionic_strength_beyond_activity_model"; ionicStrengthMolPerKg: number; validUpToMolPerKg: number }
   | { code: "no_pore_solution"; message: string }
-  | { code: "near_invariant_point"; message: string };
+  | { code: "near_invariant_point"; message: string }
+  | { code: "alkali_uptake_limited_by_pore_water"; boundFraction: number; distributionRatioFraction: number; poreWaterG: number };
 
 /** The hydrated paste at one age, per 100 g binder, with the same figures per m³ of concrete. */
 export type HydratedPaste = {
@@ -143,8 +144,9 @@ export function hydratePaste(
       timeLimitMs: options.timeLimitMs,
     }), options.warmStart, options.alkaliBoundFraction);
   if (!uptake.ok) return uptake;
-  const { assemblage, boundMol } = uptake.value;
+  const { assemblage, boundMol, limited } = uptake.value;
   const warnings: HydrationWarning[] = [...composition.warnings];
+  if (limited) warnings.push({ code: "alkali_uptake_limited_by_pore_water", ...limited, poreWaterG: (assemblage.solution?.waterKg ?? 0) * 1000 });
   if (assemblage.nearInvariant)
     warnings.push({ code: "near_invariant_point", message: "the assemblage lies near an invariant point: phases within 0.01 log10 units of saturation may be left out" });
 
@@ -263,14 +265,22 @@ type Solve = (totals: Record<string, number>, warmStart?: SerializedState) => { 
  * Lothenbach & Winnefeld 2006): bound = Rd·m(C-S-H)·c(pore solution). Each pass removes the bound alkali
  * as hydroxide (X + O + H, electroneutral) from the system and re-solves, warm-started, until the bound
  * amounts change by less than the tolerance. The pore solution is taken as 1 mL per g of water.
+ *
+ * Nearly dry pastes (low w/b, late ages): removing the alkali lets the hydrates take up more of the little pore
+ * water, so the amount Rd asks for can leave no solution at all, while the Na still needs one. A step whose
+ * equilibrium cannot be computed is then halved towards the last computed amount, within a small budget of
+ * unsolved steps per paste; when the budget is spent, the last computed assemblage is kept and `limited` reports
+ * how far the uptake got, rather than failing the paste.
+ * (A last step that had to be halved also counts as limited: the amount Rd asks for could not be computed.)
  */
 function alkaliUptakeByCsh(
   totals: Record<string, number>,
   solve: Solve,
   warmStart?: SerializedState,
   startingFraction: Record<string, number> = {},
-): { ok: true; value: { assemblage: EquilibriumResult; boundMol: Record<string, number> } } | { ok: false; error: EquilibriumFailure } {
+): { ok: true; value: { assemblage: EquilibriumResult; boundMol: Record<string, number>; limited: AlkaliUptakeLimit | null } } | { ok: false; error: EquilibriumFailure } {
   const ratios = alkaliUptake.distributionRatioMlPerG;
+  const iterations = alkaliUptake.iterations;
   // `bound` is always the amount removed from the system that `result` was solved for.
   const withoutBound = (amounts: Record<string, number>) => {
     const reduced = { ...totals };
@@ -282,9 +292,15 @@ function alkaliUptakeByCsh(
     }
     return reduced;
   };
+  const none = { Na: 0, K: 0 };
   let bound: Record<string, number> = { Na: (startingFraction.Na ?? 0) * (totals.Na ?? 0), K: (startingFraction.K ?? 0) * (totals.K ?? 0) };
   let result = solve(withoutBound(bound), warmStart);
-  for (let pass = 0; pass < alkaliUptake.iterations.maximum && result.ok; pass++) {
+  // A neighbour's fraction can be more than this paste's little water allows: start again from no uptake.
+  if (!result.ok && (bound.Na > 0 || bound.K > 0)) [bound, result] = [none, solve(withoutBound(none), warmStart)];
+  let wanted: Record<string, number> | null = null;
+  let waterRanOut = false;
+  let unsolvedSteps = 0;
+  for (let pass = 0; pass < iterations.maximum && result.ok; pass++) {
     const csh = result.value.phases.find((p) => p.id === "csh");
     const solution = result.value.solution;
     if (!csh || !solution) break;
@@ -298,10 +314,32 @@ function alkaliUptakeByCsh(
       next[element] = (total * rdTimesMass) / (poreMl + rdTimesMass);
       change = Math.max(change, Math.abs(next[element] - bound[element]) / total);
     }
-    if (change < alkaliUptake.iterations.relativeTolerance) break;
-    result = solve(withoutBound(next), result.value.state);
-    bound = next;
+    wanted = next;
+    if (change < iterations.relativeTolerance) {
+      waterRanOut = false;
+      break;
+    }
+    let step = next;
+    let attempt = solve(withoutBound(step), result.value.state);
+    // Unsolved steps cost hundreds of ms each (the whole retry chain runs): a few per paste, shared by all passes.
+    while (!attempt.ok && ++unsolvedSteps < iterations.unsolvedStepsAllowed) {
+      step = { Na: (bound.Na + step.Na) / 2, K: (bound.K + step.K) / 2 };
+      attempt = solve(withoutBound(step), result.value.state);
+    }
+    waterRanOut = step !== next || !attempt.ok;
+    if (!attempt.ok) break;
+    result = attempt;
+    bound = step;
   }
   if (!result.ok) return result;
-  return { ok: true, value: { assemblage: result.value, boundMol: Object.fromEntries(Object.entries(bound).filter(([, v]) => v > 0)) } };
+  let limited: AlkaliUptakeLimit | null = null;
+  if (wanted && waterRanOut) {
+    const total = (totals.Na ?? 0) + (totals.K ?? 0);
+    const fraction = (amounts: Record<string, number>) => (total > 0 ? (amounts.Na + amounts.K) / total : 0);
+    limited = { boundFraction: fraction(bound), distributionRatioFraction: fraction(wanted) };
+  }
+  return { ok: true, value: { assemblage: result.value, boundMol: Object.fromEntries(Object.entries(bound).filter(([, v]) => v > 0)), limited } };
 }
+
+/** How far the alkali uptake got when the pore water ran out: fractions of the reacted Na + K held in C-S-H. */
+type AlkaliUptakeLimit = { boundFraction: number; distributionRatioFraction: number };

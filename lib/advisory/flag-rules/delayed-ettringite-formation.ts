@@ -56,8 +56,9 @@ export function delayedEttringiteFormationFlag(
             ? `In this mix the engine finds ettringite stable up to between ${f1(s.stabilityLimit.bracketC[0])} and ${f1(s.stabilityLimit.bracketC[1])} °C (narrowed as far as this flag needs).`
           : "In this mix the engine finds no ettringite at any temperature computed.";
   const dataCaveat =
-    "The thermodynamic data used are known to make ettringite too stable at high temperature (about 1.3 log10 units at 85 °C), so the computed stability temperature is likely too high; " +
-    "published studies of Portland pastes place it near 65–75 °C (Lothenbach et al. 2007; Taylor, Famy & Scrivener 2001).";
+    "The computed stability temperature is likely too high: for typical Portland cements the model finds it well above the 65–75 °C that published studies of Portland pastes report " +
+    "(Lothenbach et al. 2007; Taylor, Famy & Scrivener 2001). The model does not hold the sulfate that C-S-H takes up at high temperature, and above 50 °C siliceous hydrogarnet " +
+    "takes the aluminium that AFm phases would otherwise hold, leaving ettringite the only solid host of sulfate; this is why the common 70 °C limit also applies here.";
   const atCuring = s.atCuring;
   // The index without ettringite is not computed on a Monte Carlo sample's path where ettringite is present (positive then).
   const indexText = (state: TemperatureState) =>

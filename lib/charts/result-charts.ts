@@ -1,5 +1,6 @@
 import type { ChartData } from "./chart-data";
 import { elementTemperatureChart } from "./element-temperature";
+import { heatOfHydrationChart } from "./heat-of-hydration";
 import { hydrationTimelineChart, type TimelinePointVolumes } from "./hydration-timeline";
 import { phaseVolumesChart, type AssemblageVolumes } from "./phase-volumes";
 import { rhTemperatureMapChart, type RhTemperatureCell } from "./rh-temperature-map";
@@ -17,6 +18,9 @@ import { strengthMaturityChart, type MaturityPoint, type StrengthPoint } from ".
  * - scenarios: `scenarios` — an array, or an object of scenarios, each a sweep `{ id, title, doseLabel, doseUnit,
  *   points: [{ dose, pH, phases | phaseVolumesCm3 }] }` or `{ sweep: <that>, summary }`;
  * - hydration timeline: `assemblage.timeline`, `timeline` or `hydrationTimeline` — `[{ ageDays, phases | phaseVolumesCm3, poreSolutionVolumeCm3 }]`;
+ * - heat of hydration: `curing.heatModel` — `curve: [{ equivalentAgeH, cumulativeHeatJPerGBinder }]`, `label`,
+ *   `referenceTemperatureC`, `perPhaseCheckJPerGCement`, `cementFractionOfBinder` (results saved before it was
+ *   reported have no curve and no chart);
  * - element temperature, strength, maturity: `curing` — the curing advice (`temperature`, `strength`,
  *   `maturity`, `strengthTargets`); the DEF limit from `curing.limits.maxTemperatureC` or 70 °C (Taylor, Famy &
  *   Scrivener 2001, Cem. Concr. Res. 31, 683);
@@ -140,6 +144,23 @@ function curingCharts(result: Loose): ChartData[] {
   const curing = result.curing;
   if (!isObject(curing)) return [];
   const charts: ChartData[] = [];
+  const model = curing.heatModel;
+  if (isObject(model) && Array.isArray(model.curve)) {
+    const curve = model.curve.filter((p): p is { equivalentAgeH: number; cumulativeHeatJPerGBinder: number } => isObject(p) && isNumber(p.equivalentAgeH) && p.equivalentAgeH > 0 && isNumber(p.cumulativeHeatJPerGBinder));
+    const check = isObject(model.perPhaseCheckJPerGCement) && isNumber(model.perPhaseCheckJPerGCement.lerchBogue) && isNumber(model.perPhaseCheckJPerGCement.taylor1997)
+      ? { lerchBogue: model.perPhaseCheckJPerGCement.lerchBogue, taylor1997: model.perPhaseCheckJPerGCement.taylor1997 }
+      : undefined;
+    if (curve.length > 1)
+      charts.push(
+        heatOfHydrationChart({
+          label: typeof model.label === "string" ? model.label : "heat model",
+          referenceTemperatureC: isNumber(model.referenceTemperatureC) ? model.referenceTemperatureC : 20,
+          curve,
+          ...(check ? { perPhaseCheckJPerGCement: check } : {}),
+          ...(isNumber(model.cementFractionOfBinder) ? { cementFractionOfBinder: model.cementFractionOfBinder } : {}),
+        }),
+      );
+  }
   const t = curing.temperature;
   if (isObject(t)) {
     const timesH = numberArray(t.timesH);

@@ -1,6 +1,6 @@
 import type { Flag } from "../advisory/flag";
 import type { CuringInput } from "../schema/curing-input";
-import type { CuringBinder, ScmFraction } from "./binder-description";
+import { cementFractionOfBinder, type CuringBinder, type ScmFraction } from "./binder-description";
 import { ambientTemperatureC, type AmbientHistory } from "./ambient-temperature";
 import { assessEarlyFreezing, type FreezingAssessment } from "./cold-weather";
 import { curingCautions, type CuringCaution } from "./curing-cautions";
@@ -26,16 +26,25 @@ import { coverCoefficientWPerM2K, surfaceCover } from "./surface-heat-transfer";
 const percent = 100; // mass % → mass fraction
 const joulesPerGramPerJPerKg = 1 / 1000;
 const minutesPerHour = 60;
+/** The heat curve reported with the advice: equivalent ages from 1 h to 1 year, log-spaced (common practice for a heat curve). */
+const reportedCurve = { firstEquivalentAgeH: 1, lastEquivalentAgeH: 8760, points: 25 } as const;
 
 export type CuringAdvice = {
   heatModel: {
     label: string;
+    source: HeatSourceKind;
+    /** Short name of the source (`HEAT_SOURCE_NAMES`). */
+    sourceName: string;
     referenceTemperatureC: number;
     activationEnergyJPerMol: number;
     ultimateHeatJPerGBinder: number | null;
     hydration: HydrationParameters | null;
     /** Classic per-phase heat of the cement at complete hydration, J/g cement (the check). */
     perPhaseCheckJPerGCement: { lerchBogue: number; taylor1997: number };
+    /** Mass fraction of Portland cement in the binder: the per-phase check per g binder is the value above times this. */
+    cementFractionOfBinder: number;
+    /** The heat source's cumulative heat, J/g binder, against equivalent age at its reference temperature (h), 1 h to 1 year. */
+    curve: { equivalentAgeH: number; cumulativeHeatJPerGBinder: number }[];
   };
   heat: { timeH: number; coreEquivalentAgeH: number; coreHeatJPerGBinder: number }[];
   temperature: {
@@ -150,6 +159,18 @@ function outputIndices(timesH: readonly number[], outputIntervalH: number): numb
 export type AdviseCuringOptions = {
   /** Label of an entered heat curve in the output (e.g. the thermodynamic heat of the binder form); default "entered heat curve". */
   heatCurveLabel?: string;
+  /** Where an entered heat curve comes from; default "entered" (a measured curve). */
+  heatCurveSource?: Exclude<HeatSourceKind, "per-phase">;
+};
+
+/** The kinds of heat source: a curve entered by the user, the thermodynamic heat of the binder, or the classic per-phase heats. */
+export type HeatSourceKind = "entered" | "thermodynamic" | "per-phase";
+
+/** Short names of the heat sources, for key figures and comparisons. */
+const HEAT_SOURCE_NAMES: Record<HeatSourceKind, string> = {
+  entered: "entered heat curve",
+  thermodynamic: "data-set enthalpies",
+  "per-phase": "classic per-phase heats",
 };
 
 /**
@@ -159,6 +180,7 @@ export type AdviseCuringOptions = {
 export function adviseCuring(input: CuringInput, options: AdviseCuringOptions = {}): CuringAdvice {
   const binder = curingBinderOf(input);
   let heatSource: HeatSource;
+  const heatSourceKind: HeatSourceKind = input.heatCurve ? (options.heatCurveSource ?? "entered") : "per-phase";
   let ultimate: number | null = null;
   let hydration: HydrationParameters | null = null;
   if (input.heatCurve) {
@@ -251,6 +273,8 @@ export function adviseCuring(input: CuringInput, options: AdviseCuringOptions = 
   return {
     heatModel: {
       label: heatSource.label,
+      source: heatSourceKind,
+      sourceName: HEAT_SOURCE_NAMES[heatSourceKind],
       referenceTemperatureC: heatSource.referenceTemperatureC,
       activationEnergyJPerMol: round(heatSource.activationEnergyJPerMol, 0),
       ultimateHeatJPerGBinder: ultimate === null ? null : round(ultimate * joulesPerGramPerJPerKg, 1),
@@ -259,6 +283,8 @@ export function adviseCuring(input: CuringInput, options: AdviseCuringOptions = 
         lerchBogue: round(perPhaseHeatJPerG(binder.cementPhases, 1, "lerch-bogue"), 1),
         taylor1997: round(perPhaseHeatJPerG(binder.cementPhases, 1, "taylor-1997"), 1),
       },
+      cementFractionOfBinder: round(cementFractionOfBinder(binder), 4),
+      curve: reportedHeatCurve(heatSource),
     },
     heat: keep.map((i) => ({
       timeH: round(thermal.timesH[i], 4),
@@ -302,3 +328,12 @@ function nullableRound(x: number | null, digits: number): number | null {
   return x === null ? null : round(x, digits);
 }
 
+/** The heat source sampled on `reportedCurve`'s log-spaced equivalent ages, J/g binder. */
+function reportedHeatCurve(source: HeatSource): CuringAdvice["heatModel"]["curve"] {
+  const { firstEquivalentAgeH, lastEquivalentAgeH, points } = reportedCurve;
+  const ratio = Math.log(lastEquivalentAgeH / firstEquivalentAgeH) / (points - 1);
+  return Array.from({ length: points }, (_, i) => {
+    const equivalentAgeH = firstEquivalentAgeH * Math.exp(ratio * i);
+    return { equivalentAgeH: round(equivalentAgeH, 4), cumulativeHeatJPerGBinder: round(source.cumulativeHeatJPerKgBinder(equivalentAgeH) * joulesPerGramPerJPerKg, 2) };
+  });
+}

@@ -24,6 +24,7 @@ const FIGURES: readonly FigureDefinition[] = [
   { id: "co2BindingCapacity", label: "CO2 binding capacity", unit: "mol/m³ concrete", paths: [["scenarios", "carbonation", "summary", "co2BindingCapacityMolPerM3"]] },
   { id: "carbonationCoefficient", label: "Carbonation coefficient", unit: "mm/√year", paths: [["scenarios", "carbonation", "depth", "coefficientMmPerSqrtYear"]] },
   { id: "carbonationTimeToCover", label: "Time for carbonation to reach the cover", unit: "years", paths: [["scenarios", "carbonation", "depth", "timeToCoverYears"]], reportedUpTo: CARBONATION_TIME_REPORTING_LIMIT_YEARS },
+  { id: "heatSource", label: "Heat of hydration from", unit: "", paths: [["curing", "heatModel", "sourceName"]] },
   { id: "peakTemperature", label: "Peak core temperature", unit: "°C", paths: [["curing", "temperature", "peakCoreC"]] },
   { id: "maxDifference", label: "Largest core–surface difference", unit: "°C", paths: [["curing", "temperature", "maxDifferenceC"]] },
   { id: "minimumCuring", label: "Minimum curing period", unit: "d", paths: [["curing", "minimumCuringDays"]] },

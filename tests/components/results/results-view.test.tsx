@@ -36,6 +36,30 @@ describe("results view", () => {
     expect(screen.getByRole("heading", { name: "Element temperature" })).toBeTruthy();
   });
 
+  it("draws the heat of hydration behind the element temperature, with the per-phase check, and names its source among the key figures", () => {
+    const heatModel = {
+      label: "thermodynamic heat of hydration (enthalpy balance of reacted binder and equilibrium assemblage)",
+      source: "thermodynamic",
+      sourceName: "data-set enthalpies",
+      referenceTemperatureC: 20,
+      perPhaseCheckJPerGCement: { lerchBogue: 456, taylor1997: 467 },
+      cementFractionOfBinder: 1,
+      curve: [
+        { equivalentAgeH: 1, cumulativeHeatJPerGBinder: 29 },
+        { equivalentAgeH: 24, cumulativeHeatJPerGBinder: 215 },
+        { equivalentAgeH: 8760, cumulativeHeatJPerGBinder: 474 },
+      ],
+    };
+    render(<ResultsView result={{ ...result, curing: { ...result.curing, heatModel } }} />);
+    expect(screen.getByText("Heat of hydration from")).toBeTruthy();
+    expect(screen.getByText("data-set enthalpies")).toBeTruthy();
+    const figure = screen.getByRole("heading", { name: "Heat of hydration" }).closest("figure")!;
+    expect(within(figure as HTMLElement).getByText(/Heat source of the element temperature: thermodynamic heat of hydration/)).toBeTruthy();
+    fireEvent.click(within(figure as HTMLElement).getByRole("button", { name: "Show data table" }));
+    const cells = within(figure as HTMLElement).getAllByRole("cell").map((c) => c.textContent);
+    expect(cells).toEqual(expect.arrayContaining(["215", "474"]));
+  });
+
   it("shows the computation notes (a scenario that could not be computed) after the key figures, and no such section without them", () => {
     render(<ResultsView result={{ ...result, warnings: [{ code: "scenario_failed", scenario: "sulfate", reason: "no_convergence", message: "at 12.0 mmol SO4 per 100 g binder: the phase set cycles" }] }} />);
     const section = screen.getByRole("heading", { name: "Computation notes" }).closest("section")!;

@@ -47,6 +47,9 @@ import { SpeciesEnthalpyFailure, speciesEnthalpyResolver } from "./species-entha
  * above the published 450–520 J/g, half of the excess from the ferrite and a third from the alite: the heat, and
  * the temperature rise it drives, errs high.
  */
+/** How the element temperature model names this heat source. */
+export const THERMODYNAMIC_HEAT_LABEL = "thermodynamic heat of hydration (enthalpy balance of reacted binder and equilibrium assemblage)";
+
 export type ThermodynamicHeat = {
   temperatureC: number;
   /** Heat released per g binder, J/g (positive: exothermic). */

@@ -44,6 +44,8 @@ function noteOf(w: Record<string, unknown>): string {
       return `The pore solution's ionic strength, ${num(w.ionicStrengthMolPerKg)} mol/kg, is above the ${num(w.validUpToMolPerKg)} mol/kg to which the extended Debye–Hückel activity model is used with confidence: dissolved concentrations and pH are less certain.`;
     case "alkali_uptake_limited_by_pore_water":
       return `The paste is nearly dry (${num(w.poreWaterG, 2)} g of pore water per 100 g binder): the C-S-H could be given only ${num(100 * (w.boundFraction as number), 2)} % of the alkalis, not the ${num(100 * (w.distributionRatioFraction as number), 2)} % its distribution ratio asks, without the pore solution vanishing. Dissolved alkalis and pH are upper estimates.`;
+    case "thermodynamic_heat_unavailable":
+      return `The heat of hydration could not be computed from the data set's enthalpies (${text(w.message)}): the element temperature uses the classic per-phase heats of Lerch & Bogue (1934) with the hydration curve of Schindler & Folliard (2005).`;
     case "scm_model_extrapolated":
       return w.reason === "temperature_outside_data"
         ? `The reaction degree of the ${text(w.type)} is extrapolated: the curing temperature ${num(w.curingTemperatureC)} °C lies outside the ${num(w.minC)}–${num(w.maxC)} °C of its data.`

@@ -2,6 +2,7 @@ import type { BulkComposition } from "../cement/bulk-composition";
 import { hydratePaste, type HydratedPaste } from "../cement/hydrate-paste";
 import type { Dataset } from "../data/load-dataset";
 import type { EquilibriumFailure } from "../equilibrium/failure";
+import type { CuringInput } from "../schema/curing-input";
 import type { SerializedState } from "../equilibrium/result";
 
 /** One point of a scenario sweep, in the shape the charts read (`lib/charts/scenario-sweep.ts`). */
@@ -56,7 +57,15 @@ export type WarmStartBook = {
   figures: Map<string, number>;
   /** Solver states of equilibria other than pastes (e.g. the dried solids of the drying scenario), by name. */
   states: Map<string, SerializedState>;
+  /**
+   * The thermodynamic heat curve of the reference run's curing model (null: not available for this binder), so that a
+   * sample's element temperature is the reference's; undefined until the reference run has computed it.
+   */
+  heatCurve?: HeatCurveInput | null;
 };
+
+/** A heat curve as the curing model takes it (`curing.thermal.heatCurve`). */
+export type HeatCurveInput = NonNullable<CuringInput["heatCurve"]>;
 
 export function newWarmStartBook(): WarmStartBook {
   return { mode: "record", chains: new Map(), figures: new Map(), states: new Map() };

@@ -11,7 +11,7 @@ import { lowAlkalinityReserveFlag } from "../advisory/flag-rules/low-alkalinity-
 import { magnesiumSulfateAttackFlag } from "../advisory/flag-rules/magnesium-sulfate-attack";
 import { sulfateAttackFlag } from "../advisory/flag-rules/sulfate-attack";
 import { severeSulfateExposure } from "../advisory/sulfate-exposure";
-import { adviseCuring, type CuringAdvice } from "../curing/advise-curing";
+import type { CuringAdvice } from "../curing/advise-curing";
 import { describeFailure } from "../equilibrium/failure";
 import { binderSystemIssue } from "../cement/binder-system-issue";
 import { carbonationScenario, type CarbonationScenario } from "../scenarios/carbonation";
@@ -27,6 +27,7 @@ import { sulfateIngress, type SulfateScenario } from "../scenarios/sulfate-ingre
 import type { Dataset } from "../data/load-dataset";
 import { alkaliBoundFractionOf, bookedPaste, recordPaste, type ScenarioBase, type WarmStartBook } from "../scenarios/sweep";
 import { binderInputOf, type AssessInput } from "../schema/assess-input";
+import { assessmentCuring } from "./assessment-curing";
 import { pasteFailureMessage } from "./paste-failure";
 import { domainError, validationError, type ServiceOutcome } from "./outcome";
 
@@ -187,11 +188,8 @@ export function assessWithDataset(input: AssessInput, binder: BinderSystem, data
   if (reserve) flags.push(reserve);
 
   // The curing peak: the element model's core peak when the thermal model is given, else the entered maximum.
-  let curing: CuringAdvice | undefined;
-  if (input.curing.thermal) {
-    curing = adviseCuring(input.curing.thermal);
-    flags.push(...curing.flags);
-  }
+  const { curing, warnings: curingWarnings } = assessmentCuring(input, system.value, dataset, book);
+  if (curing) flags.push(...curing.flags);
   const curingMaxTemperatureC = curing ? Math.max(curing.temperature.peakCoreC, input.curing.maxTemperatureC ?? -Infinity) : input.curing.maxTemperatureC;
   const scenarioContext = { ...context, curingMaxTemperatureC };
   const temperature = temperatureHistory(base, exposure, {
@@ -253,6 +251,7 @@ export function assessWithDataset(input: AssessInput, binder: BinderSystem, data
       warnings: [
         ...paste.value.warnings,
         ...timelineWarnings,
+        ...curingWarnings,
         ...Object.entries(scenarioErrors).map(([scenario, e]) => ({ code: "scenario_failed", scenario, reason: e!.code, message: e!.message })),
       ] as AssessmentResult["warnings"],
     },

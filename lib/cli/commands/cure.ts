@@ -11,10 +11,10 @@ import { readJsonInput } from "../read-input";
 import { parseCuringInput } from "../../schema/curing-input";
 import { adviseCuring } from "../../curing/advise-curing";
 import { curingInputFromBinderForm, isBinderForm, type BinderFormConversion } from "../../curing/binder-form-input";
+import { THERMODYNAMIC_HEAT_LABEL } from "../../curing/thermodynamic-heat";
 
 export const summary = "curing advisory: element temperature, maturity, strength, curing period and risk flags";
 
-const thermodynamicHeatLabel = "thermodynamic heat of hydration (enthalpy balance of reacted binder and equilibrium assemblage)";
 
 const round = (x: number, digits: number) => Math.round(x * 10 ** digits) / 10 ** digits;
 
@@ -53,7 +53,7 @@ export async function run(args: string[]): Promise<number> {
     process.stderr.write(`input: ${parsed.error.message}\n`);
     return 2;
   }
-  const advice = adviseCuring(parsed.value, conversion ? { heatCurveLabel: thermodynamicHeatLabel } : {});
+  const advice = adviseCuring(parsed.value, conversion ? { heatCurveLabel: THERMODYNAMIC_HEAT_LABEL, heatCurveSource: "thermodynamic" } : {});
   const output = conversion ? { ...advice, thermodynamicHeat: thermodynamicHeatSection(conversion) } : advice;
   process.stdout.write(JSON.stringify(output, null, 2) + "\n");
   return 0;

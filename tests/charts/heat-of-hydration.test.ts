@@ -23,14 +23,12 @@ describe("heat of hydration chart", () => {
   });
 
   it("draws the classic per-phase heats as the check, per g binder for the cement's share of the binder", () => {
-    const chart = heatOfHydrationChart(model);
-    expect(chart.thresholds.map((t) => [t.value, t.unit])).toEqual([
-      [235, "J/g"],
-      [240, "J/g"],
-    ]);
-    expect(chart.thresholds[0].label).toMatch(/Lerch & Bogue per-phase heats, cement share/);
+    const chart = heatOfHydrationChart({ ...model, cementFractionOfBinder: 0.75, perPhaseCheckJPerGCement: { lerchBogue: 455.9, taylor1997: 466.9 } });
+    // 455.9 × 0.75 = 341.925, rounded to 0.1 J/g for the label; Taylor's set is named in the note.
+    expect(chart.thresholds).toEqual([{ label: "Complete hydration, Lerch & Bogue per-phase heats, cement share", value: 341.9, unit: "J/g", axis: "left" }]);
+    expect(chart.note).toContain("Taylor 1997: 350.2 J/g binder");
     const plain = heatOfHydrationChart({ ...model, cementFractionOfBinder: 1 });
-    expect(plain.thresholds.map((t) => t.value)).toEqual([470, 480]);
+    expect(plain.thresholds.map((t) => t.value)).toEqual([470]);
     expect(plain.thresholds[0].label).not.toMatch(/share/);
   });
 

@@ -1,4 +1,5 @@
 import { formatChartCell } from "./data-table";
+import { scenarioFindings } from "../../lib/report/scenario-findings";
 
 /**
  * Tables of a result: the pore solution and the exposure classes (EN 206 and ACI 318) with the compliance of
@@ -175,6 +176,38 @@ export function ExposureClassTable({ result }: { result: unknown }) {
         </table>
       ))}
       {exposure.statement ? <p className="hint">{exposure.statement}</p> : null}
+    </section>
+  );
+}
+
+/** What each durability scenario found (`lib/report/scenario-findings.ts`), whether or not a flag fired. */
+export function ScenarioFindingsTable({ result }: { result: unknown }) {
+  const findings = scenarioFindings(result);
+  if (findings.length === 0) return null;
+  return (
+    <section className="result-section" aria-labelledby="findings-title">
+      <h3 id="findings-title">What the durability scenarios found</h3>
+      <table className="data-table">
+        <thead>
+          <tr>
+            <th scope="col">Scenario</th>
+            <th scope="col">Quantity</th>
+            <th scope="col">Value</th>
+          </tr>
+        </thead>
+        <tbody>
+          {findings.map((f, i) => (
+            <tr key={`${f.scenario}-${f.quantity}`}>
+              {i === 0 || findings[i - 1].scenario !== f.scenario ? <th scope="row">{f.scenario}</th> : <td />}
+              <td>{f.quantity}</td>
+              <td>
+                {formatChartCell(f.value)}
+                {f.unit ? ` ${f.unit}` : ""}
+              </td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
     </section>
   );
 }

@@ -7,13 +7,13 @@ import { withPhaseLabels } from "../../lib/charts/phase-labels";
 import { cautionTextsFor } from "../../lib/advisory/cautions";
 import { CautionList, FlagList } from "./flag-list";
 import { ChartPanel } from "./chart-panel";
-import { ExposureClassTable, PoreSolutionTable } from "./result-tables";
+import { ExposureClassTable, PoreSolutionTable, ScenarioFindingsTable } from "./result-tables";
 import { formatChartCell } from "./data-table";
 
 /**
  * The results of an assessment: flags first (most severe first), the cautions (always shown, the standard
  * assessment cautions when a result carries none), key figures, the computation notes (what could not be computed,
- * what is extrapolated), charts and tables.
+ * what is extrapolated), charts, what each scenario found, and the pore solution and exposure-class tables.
  */
 export function ResultsView({ result, heading = "Results" }: { result: unknown; heading?: string }) {
   const flags = flagsOf(result);
@@ -65,6 +65,7 @@ export function ResultsView({ result, heading = "Results" }: { result: unknown; 
           ))}
         </section>
       ) : null}
+      <ScenarioFindingsTable result={result} />
       <PoreSolutionTable result={result} />
       <ExposureClassTable result={result} />
     </section>

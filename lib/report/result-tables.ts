@@ -1,9 +1,11 @@
 import { formatCell, type ReportTable } from "./report-model";
 import { valueAt } from "./key-figures";
+import { scenarioFindings } from "./scenario-findings";
 
 /**
- * The tables of an assessment result besides its charts: exposure classes (EN 206 and ACI 318, each with
- * its basis and source), the limiting values checked against the mix, and the pore solution. Read
+ * The tables of an assessment result besides its charts: what each durability scenario found, exposure classes
+ * (EN 206 and ACI 318, each with its basis and source), the limiting values checked against the mix, and the pore
+ * solution. Read
  * defensively from saved JSON; a table whose data are absent is left out.
  */
 type Loose = Record<string, unknown>;
@@ -46,6 +48,12 @@ function poreSolutionTable(result: unknown): ReportTable | null {
   return { title: "Pore solution at equilibrium", columns: ["Quantity", "mmol/kg water (unless stated)"], rows };
 }
 
+function scenarioFindingsTable(result: unknown): ReportTable | null {
+  const findings = scenarioFindings(result);
+  if (findings.length === 0) return null;
+  return { title: "What the durability scenarios found", columns: ["Scenario", "Quantity", "Value", "Unit"], rows: findings.map((f) => [f.scenario, f.quantity, formatCell(f.value), f.unit]) };
+}
+
 export function resultTables(result: unknown): ReportTable[] {
-  return [exposureClassTable(result), complianceTable(result), poreSolutionTable(result)].filter((t): t is ReportTable => t !== null);
+  return [scenarioFindingsTable(result), exposureClassTable(result), complianceTable(result), poreSolutionTable(result)].filter((t): t is ReportTable => t !== null);
 }

@@ -6,7 +6,8 @@ import { demoResult } from "./real-result";
 describe("resultTables", () => {
   it("lists every exposure class of both standards with its source, the limiting values and the pore solution", async () => {
     const result = await demoResult();
-    const [classes, limits, solution] = resultTables(result);
+    const [findings, classes, limits, solution] = resultTables(result);
+    expect(findings.title).toBe("What the durability scenarios found");
     expect(classes.title).toBe("Exposure classes");
     expect(classes.rows).toHaveLength(result.exposureClasses.en206.classes.length + result.exposureClasses.aci318.classes.length);
     expect(classes.rows.every((row) => row[4].length > 0)).toBe(true);

@@ -60,6 +60,23 @@ describe("results view", () => {
     expect(cells).toEqual(expect.arrayContaining(["215", "474"]));
   });
 
+  it("lists what each scenario found, the scenario named once over its rows, values with their units", () => {
+    const scenarios = {
+      sulfate: { summary: { maximumSolidVolumeIncreasePercentOfPores: 60.5, gypsumOnsetDoseMmolPer100g: null, portlanditeExhaustedDoseMmolPer100g: 117.7 } },
+      temperature: { summary: { stabilityLimit: { kind: "found", temperatureC: 89.6 }, curingTemperatureC: 39.7 } },
+    };
+    render(<ResultsView result={{ ...result, scenarios }} />);
+    const section = screen.getByRole("heading", { name: "What the durability scenarios found" }).closest("section")!;
+    const rows = within(section).getAllByRole("row").slice(1).map((r) => Array.from(r.querySelectorAll("th, td")).map((c) => c.textContent));
+    expect(rows).toEqual([
+      ["Sulfate ingress", "Largest solid-volume gain, of the initial capillary pores", "60.5 %"],
+      ["", "Sulfate dose at which gypsum appears", "not reached in the sweep"],
+      ["", "Sulfate dose at which portlandite is exhausted", "117.7 mmol SO4/100 g binder"],
+      ["Temperature history (delayed ettringite formation)", "Temperature above which ettringite is not stable in this mix", "89.6 °C"],
+      ["", "Curing temperature evaluated", "39.7 °C"],
+    ]);
+  });
+
   it("shows the computation notes (a scenario that could not be computed) after the key figures, and no such section without them", () => {
     render(<ResultsView result={{ ...result, warnings: [{ code: "scenario_failed", scenario: "sulfate", reason: "no_convergence", message: "at 12.0 mmol SO4 per 100 g binder: the phase set cycles" }] }} />);
     const section = screen.getByRole("heading", { name: "Computation notes" }).closest("section")!;

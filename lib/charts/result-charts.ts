@@ -1,4 +1,5 @@
 import type { ChartData } from "./chart-data";
+import { chlorideIsothermChart, type IsothermPoint } from "./chloride-isotherm";
 import { elementTemperatureChart } from "./element-temperature";
 import { heatOfHydrationChart } from "./heat-of-hydration";
 import { hydrationTimelineChart, type TimelinePointVolumes } from "./hydration-timeline";
@@ -17,6 +18,8 @@ import { strengthMaturityChart, type MaturityPoint, type StrengthPoint } from ".
  *   empty porosity; per 100 g binder), or a flat `assemblage` with `phases: [{ id, volumeCm3 }]` or `phaseVolumesCm3`;
  * - scenarios: `scenarios` — an array, or an object of scenarios, each a sweep `{ id, title, doseLabel, doseUnit,
  *   points: [{ dose, pH, phases | phaseVolumesCm3 }] }` or `{ sweep: <that>, summary }`;
+ * - chloride binding isotherm: `scenarios.chloride.isotherm` — `[{ freeChlorideMolPerKgWater, boundChlorideMgPerGBinder,
+ *   totalChlorideMassPercent }]`, with `scenarios.chloride.summary.exposure.freeChlorideMolPerKgWater`;
  * - hydration timeline: `assemblage.timeline`, `timeline` or `hydrationTimeline` — `[{ ageDays, phases | phaseVolumesCm3, poreSolutionVolumeCm3 }]`;
  * - heat of hydration: `curing.heatModel` — `curve: [{ equivalentAgeH, cumulativeHeatJPerGBinder }]`, `label`,
  *   `referenceTemperatureC`, `perPhaseCheckJPerGCement`, `cementFractionOfBinder` (results saved before it was
@@ -140,6 +143,18 @@ function rhMapOf(result: Loose): RhTemperatureCell[] {
     .map((c) => ({ temperatureC: c.temperatureC as number, relativeHumidityPercent: c.relativeHumidityPercent as number, state: c.state as string }));
 }
 
+/** The chloride scenario's isotherm (`scenarios.chloride.isotherm`) and its exposure point (`summary.exposure`). */
+function isothermOf(result: Loose): { points: IsothermPoint[]; exposureFreeChlorideMolPerKgWater?: number } | undefined {
+  const chloride = isObject(result.scenarios) && isObject(result.scenarios.chloride) ? result.scenarios.chloride : undefined;
+  if (!chloride || !Array.isArray(chloride.isotherm)) return undefined;
+  const points = chloride.isotherm.filter(
+    (p): p is IsothermPoint => isObject(p) && isNumber(p.freeChlorideMolPerKgWater) && isNumber(p.boundChlorideMgPerGBinder) && isNumber(p.totalChlorideMassPercent),
+  );
+  if (points.length < 2) return undefined;
+  const exposure = isObject(chloride.summary) && isObject(chloride.summary.exposure) ? chloride.summary.exposure.freeChlorideMolPerKgWater : undefined;
+  return { points, ...(isNumber(exposure) ? { exposureFreeChlorideMolPerKgWater: exposure } : {}) };
+}
+
 function curingCharts(result: Loose): ChartData[] {
   const curing = result.curing;
   if (!isObject(curing)) return [];
@@ -193,6 +208,8 @@ export function resultCharts(result: unknown): ChartData[] {
   const assemblage = assemblageOf(result);
   if (assemblage) charts.push(phaseVolumesChart([assemblage]));
   for (const sweep of sweepsOf(result)) charts.push(scenarioSweepChart(sweep));
+  const isotherm = isothermOf(result);
+  if (isotherm) charts.push(chlorideIsothermChart(isotherm.points, isotherm.exposureFreeChlorideMolPerKgWater));
   const timeline = timelineOf(result);
   if (timeline.length > 1) charts.push(hydrationTimelineChart(timeline));
   charts.push(...curingCharts(result));

@@ -177,11 +177,13 @@ export function assessWithDataset(input: AssessInput, binder: BinderSystem, data
       for (const flag of [sulfateAttackFlag(sulfate.value, context), gypsumFormationFlag(sulfate.value, context), magnesiumSulfateAttackFlag(sulfate.value, context)]) if (flag) flags.push(flag);
     }
   }
-  const carbonation = carbonationScenario(base, exposure, { points, coverMm: input.project?.element?.coverMm });
+  // One cover for the depth, the flag and its words: the exposure's, else the element's.
+  const coverMm = exposure.coverMm ?? input.project?.element?.coverMm;
+  const carbonation = carbonationScenario(base, exposure, { points, coverMm });
   if (!carbonation.ok) scenarioErrors.carbonation = { code: carbonation.error.code, message: describeFailure(carbonation.error) };
   else {
     scenarios.carbonation = carbonation.value;
-    const depassivation = carbonationDepassivationFlag(carbonation.value, { exposure: { ...exposure, coverMm: exposure.coverMm ?? input.project?.element?.coverMm } });
+    const depassivation = carbonationDepassivationFlag(carbonation.value, { exposure: { ...exposure, coverMm } });
     if (depassivation) flags.push(depassivation);
   }
   const reserve = lowAlkalinityReserveFlag({ portlanditeKgPerM3: paste.value.perM3.portlanditeKg, carbonatableCaMolPerM3: paste.value.perM3.carbonatableCaMol, pH: paste.value.poreSolution?.pH ?? null });

@@ -25,6 +25,14 @@ describe("runAssessment", () => {
     expect(r.value.versions.dataset).toMatch(/^[0-9a-f]{16}$/);
   });
 
+  it("uses one cover, the exposure's before the element's, for the carbonation depth and its flag", async () => {
+    const r = await runAssessment({ ...input, project: { ...input.project, element: { ...input.project.element, coverMm: 60 } }, exposure: { ...input.exposure, coverMm: 20 } });
+    if (!r.ok) throw new Error(JSON.stringify(r.error));
+    const depth = r.value.scenarios.carbonation!.depth!;
+    // Papadakis: x = k √t, so the front reaches 20 mm at (20/k)² years.
+    expect(depth.timeToCoverYears).toBeCloseTo((20 / depth.coefficientMmPerSqrtYear) ** 2, 6);
+  });
+
   it("rejects bad input with field paths", async () => {
     const r = await runAssessment({ ...input, mix: { waterBinderRatio: 0.1, binderContentKgPerM3: 340 } });
     expect(r.ok).toBe(false);

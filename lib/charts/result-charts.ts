@@ -1,4 +1,5 @@
 import type { ChartData } from "./chart-data";
+import { carbonationDepthChart, type DepthPoint } from "./carbonation-depth";
 import { chlorideIsothermChart, type IsothermPoint } from "./chloride-isotherm";
 import { elementTemperatureChart } from "./element-temperature";
 import { heatOfHydrationChart } from "./heat-of-hydration";
@@ -18,6 +19,8 @@ import { strengthMaturityChart, type MaturityPoint, type StrengthPoint } from ".
  *   empty porosity; per 100 g binder), or a flat `assemblage` with `phases: [{ id, volumeCm3 }]` or `phaseVolumesCm3`;
  * - scenarios: `scenarios` — an array, or an object of scenarios, each a sweep `{ id, title, doseLabel, doseUnit,
  *   points: [{ dose, pH, phases | phaseVolumesCm3 }] }` or `{ sweep: <that>, summary }`;
+ * - carbonation depth: `scenarios.carbonation.depth.depthCurve` — `[{ timeYears, depthMm }]`, with the cover from
+ *   `inputs.exposure.coverMm` or `inputs.project.element.coverMm`;
  * - chloride binding isotherm: `scenarios.chloride.isotherm` — `[{ freeChlorideMolPerKgWater, boundChlorideMgPerGBinder,
  *   totalChlorideMassPercent }]`, with `scenarios.chloride.summary.exposure.freeChlorideMolPerKgWater`;
  * - hydration timeline: `assemblage.timeline`, `timeline` or `hydrationTimeline` — `[{ ageDays, phases | phaseVolumesCm3, poreSolutionVolumeCm3 }]`;
@@ -143,6 +146,20 @@ function rhMapOf(result: Loose): RhTemperatureCell[] {
     .map((c) => ({ temperatureC: c.temperatureC as number, relativeHumidityPercent: c.relativeHumidityPercent as number, state: c.state as string }));
 }
 
+/** The carbonation depth curve (`scenarios.carbonation.depth.depthCurve`) and the cover of the input (exposure, else element). */
+function carbonationDepthOf(result: Loose): { curve: DepthPoint[]; coverMm?: number } | undefined {
+  const carbonation = isObject(result.scenarios) && isObject(result.scenarios.carbonation) ? result.scenarios.carbonation : undefined;
+  const depth = carbonation && isObject(carbonation.depth) ? carbonation.depth : undefined;
+  if (!depth || !Array.isArray(depth.depthCurve)) return undefined;
+  const curve = depth.depthCurve.filter((p): p is DepthPoint => isObject(p) && isNumber(p.timeYears) && isNumber(p.depthMm));
+  if (curve.length === 0) return undefined;
+  const inputs = isObject(result.inputs) ? result.inputs : {};
+  const exposureCover = isObject(inputs.exposure) ? inputs.exposure.coverMm : undefined;
+  const project = isObject(inputs.project) && isObject(inputs.project.element) ? inputs.project.element.coverMm : undefined;
+  const coverMm = isNumber(exposureCover) ? exposureCover : isNumber(project) ? project : undefined;
+  return { curve, ...(coverMm !== undefined ? { coverMm } : {}) };
+}
+
 /** The chloride scenario's isotherm (`scenarios.chloride.isotherm`) and its exposure point (`summary.exposure`). */
 function isothermOf(result: Loose): { points: IsothermPoint[]; exposureFreeChlorideMolPerKgWater?: number } | undefined {
   const chloride = isObject(result.scenarios) && isObject(result.scenarios.chloride) ? result.scenarios.chloride : undefined;
@@ -208,6 +225,8 @@ export function resultCharts(result: unknown): ChartData[] {
   const assemblage = assemblageOf(result);
   if (assemblage) charts.push(phaseVolumesChart([assemblage]));
   for (const sweep of sweepsOf(result)) charts.push(scenarioSweepChart(sweep));
+  const depth = carbonationDepthOf(result);
+  if (depth) charts.push(carbonationDepthChart(depth.curve, depth.coverMm));
   const isotherm = isothermOf(result);
   if (isotherm) charts.push(chlorideIsothermChart(isotherm.points, isotherm.exposureFreeChlorideMolPerKgWater));
   const timeline = timelineOf(result);

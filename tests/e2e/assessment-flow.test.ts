@@ -221,6 +221,10 @@ describe.skipIf(chromiumMissing)("assessment flow in Chromium (skipped when /usr
     // The limit line is drawn (the axis extends to it) and named in words under the chart.
     expect(await temperature.locator("svg text", { hasText: "Delayed-ettringite limit 70 °C" }).count()).toBeGreaterThan(0);
     expect(await temperature.innerText()).toContain("Limit lines (dashed): Delayed-ettringite limit 70 °C (70 °C)");
+    // The heat behind that temperature, and what each scenario found, are shown too.
+    await page.locator('[data-chart="heat-of-hydration"] svg.recharts-surface').first().waitFor();
+    const findings = page.getByRole("heading", { name: "What the durability scenarios found" }).locator("xpath=..");
+    expect(await findings.innerText()).toContain("Temperature above which ettringite is not stable in this mix");
     await screenshot(page, "demo-results");
   }, STEP_MS);
 

@@ -267,13 +267,14 @@ type Solve = (totals: Record<string, number>, warmStart?: SerializedState) => { 
  * amounts change by less than the tolerance. The pore solution is taken as 1 mL per g of water.
  *
  * Nearly dry pastes (low w/b, late ages): removing the alkali lets the hydrates take up more of the little pore
- * water, so the amount Rd asks for can leave no solution at all, while the Na still needs one. A step whose
- * equilibrium cannot be computed is then halved towards the last computed amount, within a small budget of
- * unsolved steps per paste; when the budget is spent, the last computed assemblage is kept and `limited` reports
- * how far the uptake got, rather than failing the paste.
- * (A last step that had to be halved also counts as limited: the amount Rd asks for could not be computed.)
+ * water, so the amount Rd asks for can leave no solution at all, while the Na still needs one. Rd's own limit as the
+ * pore volume goes to zero is all the alkali bound, and that system needs no solution: when a step cannot be solved,
+ * the system with all the alkali in the C-S-H is tried, and taken if it has no solution left. Otherwise the step is
+ * halved towards the last computed amount, within a small budget of unsolved steps per paste (each costs hundreds of
+ * ms); when the budget is spent, the last computed assemblage is kept and `limited` reports how far the uptake got,
+ * rather than failing the paste. (A last step that had to be halved also counts as limited.)
  */
-function alkaliUptakeByCsh(
+export function alkaliUptakeByCsh(
   totals: Record<string, number>,
   solve: Solve,
   warmStart?: SerializedState,
@@ -321,6 +322,18 @@ function alkaliUptakeByCsh(
     }
     let step = next;
     let attempt = solve(withoutBound(step), result.value.state);
+    if (!attempt.ok) {
+      // Rd's own limit for a paste whose water runs out: bound → all as the pore volume → 0. With all the alkali in the
+      // C-S-H nothing needs a solution, so that system can be solved with none; it is the answer when it has none.
+      const all = { Na: totals.Na ?? 0, K: totals.K ?? 0 };
+      const dry = solve(withoutBound(all), result.value.state);
+      if (dry.ok && !dry.value.solution) {
+        result = dry;
+        bound = all;
+        waterRanOut = false;
+        break;
+      }
+    }
     // Unsolved steps cost hundreds of ms each (the whole retry chain runs): a few per paste, shared by all passes.
     while (!attempt.ok && ++unsolvedSteps < iterations.unsolvedStepsAllowed) {
       step = { Na: (bound.Na + step.Na) / 2, K: (bound.K + step.K) / 2 };

@@ -26,6 +26,7 @@ const FIGURES: readonly FigureDefinition[] = [
   { id: "carbonationTimeToCover", label: "Time for carbonation to reach the cover", unit: "years", paths: [["scenarios", "carbonation", "depth", "timeToCoverYears"]], reportedUpTo: CARBONATION_TIME_REPORTING_LIMIT_YEARS },
   { id: "heatSource", label: "Heat of hydration from", unit: "", paths: [["curing", "heatModel", "sourceName"]] },
   { id: "peakTemperature", label: "Peak core temperature", unit: "°C", paths: [["curing", "temperature", "peakCoreC"]] },
+  { id: "peakTemperaturePerPhaseCheck", label: "Peak core temperature with the classic per-phase heats (check)", unit: "°C", paths: [["curing", "perPhaseHeatCheck", "peakCoreC"]] },
   { id: "maxDifference", label: "Largest core–surface difference", unit: "°C", paths: [["curing", "temperature", "maxDifferenceC"]] },
   { id: "minimumCuring", label: "Minimum curing period", unit: "d", paths: [["curing", "minimumCuringDays"]] },
   { id: "monteCarloSamples", label: "Monte Carlo samples", unit: "", paths: [["uncertainty", "samples"]] },

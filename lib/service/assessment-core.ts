@@ -11,7 +11,6 @@ import { lowAlkalinityReserveFlag } from "../advisory/flag-rules/low-alkalinity-
 import { magnesiumSulfateAttackFlag } from "../advisory/flag-rules/magnesium-sulfate-attack";
 import { sulfateAttackFlag } from "../advisory/flag-rules/sulfate-attack";
 import { severeSulfateExposure } from "../advisory/sulfate-exposure";
-import type { CuringAdvice } from "../curing/advise-curing";
 import { describeFailure } from "../equilibrium/failure";
 import { binderSystemIssue } from "../cement/binder-system-issue";
 import { carbonationScenario, type CarbonationScenario } from "../scenarios/carbonation";
@@ -27,7 +26,7 @@ import { sulfateIngress, type SulfateScenario } from "../scenarios/sulfate-ingre
 import type { Dataset } from "../data/load-dataset";
 import { alkaliBoundFractionOf, bookedPaste, recordPaste, type ScenarioBase, type WarmStartBook } from "../scenarios/sweep";
 import { binderInputOf, type AssessInput } from "../schema/assess-input";
-import { assessmentCuring } from "./assessment-curing";
+import { assessmentCuring, type AssessmentCuringAdvice } from "./assessment-curing";
 import { pasteFailureMessage } from "./paste-failure";
 import { domainError, validationError, type ServiceOutcome } from "./outcome";
 
@@ -60,7 +59,7 @@ export type AssessmentResult = {
   scenarioErrors: Partial<Record<keyof AssessmentScenarios, { code: string; message: string }>>;
   exposureClasses: ExposureClassification;
   compliance: ComplianceResult;
-  curing?: CuringAdvice;
+  curing?: AssessmentCuringAdvice;
   flags: Flag[];
   uncertainty?: {
     samples: number;

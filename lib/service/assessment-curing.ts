@@ -8,24 +8,41 @@ import type { AssessInput } from "../schema/assess-input";
 export type CuringHeatWarning = { code: "thermodynamic_heat_unavailable"; reason: string; message: string };
 
 /**
+ * The element temperature the classic per-phase heats would give (Schindler & Folliard 2005 curve), beside the one the
+ * thermodynamic heat drives: the spread between two published heat models, for the engineer to see.
+ */
+export type PerPhaseHeatCheck = { label: string; peakCoreC: number; peakTimeH: number; maxDifferenceC: number };
+
+/** The curing advice of an assessment, with the per-phase check when the thermodynamic heat drove it. */
+export type AssessmentCuringAdvice = CuringAdvice & { perPhaseHeatCheck?: PerPhaseHeatCheck };
+
+/**
  * The curing advice of an assessment. Its heat source is, in this order: the heat curve entered with the thermal model
  * (a measured calorimetry curve governs); the heat of hydration from the enthalpies of the thermodynamic data set for
  * the assessment's binder, mix and reaction model (issue 6: the method; the classic per-phase heats are reported beside
  * it as the check); and, where the data set lacks an enthalpy (the glasses of slag, fly ash and natural pozzolans, and
  * metakaolin), the per-phase heats with the Schindler & Folliard (2005) curve, with a warning saying so.
  *
+ * With the thermodynamic heat, the element temperature of the per-phase heats is reported beside it (`perPhaseHeatCheck`):
+ * for a plain CEM I the two published models can differ by 20 °C at the peak (tests/service/assessment-curing.test.ts).
+ *
  * The thermodynamic curve is computed once per data set as loaded: a Monte Carlo sample reads the reference run's
  * curve from the warm-start book, so its element temperature, and the curing peak its DEF check uses, are the
  * deterministic run's (the heat's data uncertainty is not sampled).
  */
-export function assessmentCuring(input: AssessInput, binder: BinderSystem, dataset: Dataset, book: WarmStartBook | undefined): { curing?: CuringAdvice; warnings: CuringHeatWarning[] } {
+export function assessmentCuring(input: AssessInput, binder: BinderSystem, dataset: Dataset, book: WarmStartBook | undefined): { curing?: AssessmentCuringAdvice; warnings: CuringHeatWarning[] } {
   const thermal = input.curing.thermal;
   if (!thermal) return { warnings: [] };
   if (thermal.heatCurve) return { curing: adviseCuring(thermal), warnings: [] };
   const computed = book?.mode === "read" && book.heatCurve !== undefined ? { curve: book.heatCurve, warning: undefined } : thermodynamicCurve(binder, dataset);
   if (book?.mode === "record") book.heatCurve = computed.curve;
   if (!computed.curve) return { curing: adviseCuring(thermal), warnings: computed.warning ? [computed.warning] : [] };
-  return { curing: adviseCuring({ ...thermal, heatCurve: computed.curve }, { heatCurveLabel: THERMODYNAMIC_HEAT_LABEL, heatCurveSource: "thermodynamic" }), warnings: [] };
+  const curing = adviseCuring({ ...thermal, heatCurve: computed.curve }, { heatCurveLabel: THERMODYNAMIC_HEAT_LABEL, heatCurveSource: "thermodynamic" });
+  // A Monte Carlo sample needs only the flags; the check is for the deterministic result.
+  if (book?.mode === "read") return { curing, warnings: [] };
+  const perPhase = adviseCuring(thermal);
+  const t = perPhase.temperature;
+  return { curing: { ...curing, perPhaseHeatCheck: { label: perPhase.heatModel.label, peakCoreC: t.peakCoreC, peakTimeH: t.peakTimeH, maxDifferenceC: t.maxDifferenceC } }, warnings: [] };
 }
 
 function thermodynamicCurve(binder: BinderSystem, dataset: Dataset): { curve: HeatCurveInput | null; warning?: CuringHeatWarning } {

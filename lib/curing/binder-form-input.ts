@@ -155,3 +155,19 @@ export function curingInputFromBinderForm(raw: Record<string, unknown>): { ok: t
     },
   };
 }
+
+const roundTo = (x: number, digits: number) => Math.round(x * 10 ** digits) / 10 ** digits;
+
+/** The `thermodynamicHeat` section of the curing output for the binder form: the curve against age and its basis. */
+export function thermodynamicHeatSection(conversion: BinderFormConversion) {
+  const heat = conversion.heat;
+  return {
+    method: "heat released = enthalpy of the reacted anhydrous binder and water − enthalpy of the equilibrium assemblage and pore solution, at the calculation temperature",
+    temperatureC: heat.temperatureC,
+    activationEnergyJPerMol: heat.activationEnergyJPerMol,
+    curve: heat.points.map((p) => ({ ageDays: roundTo(p.ageDays, 4), equivalentAgeH: roundTo(p.equivalentAgeH, 3), heatJPerGBinder: roundTo(p.heatJPerGBinder, 1), cumulativeHeatJPerG: roundTo(p.cumulativeHeatJPerG, 1) })),
+    largestDecreaseJPerG: roundTo(heat.largestDecreaseJPerG, 2),
+    presetLabels: conversion.binder.presetLabels,
+    note: "enthalpies of the anhydrous reactants and of the hydrates are recalled values (lib/data/binders/anhydrous-enthalpies.json and the cement data set); a fully hydrated ordinary Portland cement comes out above the published 450-520 J/g (about 537 J/g for the CEM I preset, most of the excess from the ferrite), and the Parrot-Killoh degrees release it early (no dormant period)",
+  };
+}

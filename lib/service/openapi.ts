@@ -78,7 +78,13 @@ export function openApiDocument(): Record<string, unknown> {
     paths: {
       "/health": { get: { summary: "service status with engine and data-set versions", responses: { "200": { description: "up", content: json({ type: "object" }) } } } },
       "/equilibrate": computation("equilibrium phase assemblage of one system", "EquilibrateInput"),
-      "/cure": computation("curing advisory: element temperature, maturity, strength, curing period, flags", "CuringInput"),
+      "/cure": {
+        post: {
+          ...computation("curing advisory: element temperature, maturity, strength, curing period, flags", "CuringInput").post,
+          description:
+            "The body is a CuringInput, or the same without cement, supplementaryMaterials and heatCurve but with `binder: { cement, supplementaryMaterials, heatCalculation? }` as in AssessInput: the heat curve is then the thermodynamic heat of hydration of that binder, and the result carries a `thermodynamicHeat` section. That second form is checked field by field by the service (lib/curing/binder-form-input.ts), not by a schema of its own here.",
+        },
+      },
       "/hydrate": computation("hydrate assemblage of a binder at an age", "HydrateInput"),
       "/assess": computation("full assessment: assemblage, scenarios, exposure classes, flags, cautions", "AssessInput", true),
       "/assess/jobs": {

@@ -79,6 +79,37 @@ describe("POST /api/v1/cure", () => {
   });
 });
 
+describe("POST /api/v1/cure with the binder given as the assessment gives it", () => {
+  const binderForm = {
+    element: { thicknessM: 0.5 },
+    concrete: { binderKgPerM3: 350, waterBinderRatio: 0.5, fcm28MPa: 38 },
+    binder: { cement: { kind: "preset", presetId: "en197-cem-i" } },
+    placementTemperatureC: 20,
+    ambient: { kind: "constant", temperatureC: 15 },
+    durationH: 24,
+  };
+
+  it("answers 200 with the thermodynamic heat of that binder driving the element temperature, as the command line does", async () => {
+    const response = await cure(jsonRequest("/cure", "POST", binderForm), context());
+    expect(response.status).toBe(200);
+    const body = await json(response);
+    expect((body.heatModel as { source: string }).source).toBe("thermodynamic");
+    const section = body.thermodynamicHeat as { curve: { cumulativeHeatJPerG: number }[] };
+    expect(section.curve.length).toBeGreaterThan(2);
+    expect(section.curve[section.curve.length - 1].cumulativeHeatJPerG).toBeGreaterThan(300);
+  });
+
+  it("answers 422 naming the binder field, in the input's own terms", async () => {
+    const response = await cure(jsonRequest("/cure", "POST", { ...binderForm, concrete: { ...binderForm.concrete, waterBinderRatio: 0.1 } }), context());
+    expect(response.status).toBe(422);
+    const issues = (await json(response)).issues as { path: string; message: string }[];
+    expect(issues[0].path).toBe("concrete.waterBinderRatio");
+    const both = await cure(jsonRequest("/cure", "POST", { ...binderForm, cement: { phasesMassPercent: { C3S: 58, C2S: 15, C3A: 8, C4AF: 9 } } }), context());
+    expect(both.status).toBe(422);
+    expect(((await json(both)).issues as { path: string }[])[0].path).toBe("cement");
+  });
+});
+
 describe("POST /api/v1/hydrate", () => {
   const input = {
     cement: { kind: "preset", presetId: "en197-cem-i" },

@@ -10,26 +10,11 @@
 import { readJsonInput } from "../read-input";
 import { parseCuringInput } from "../../schema/curing-input";
 import { adviseCuring } from "../../curing/advise-curing";
-import { curingInputFromBinderForm, isBinderForm, type BinderFormConversion } from "../../curing/binder-form-input";
+import { curingInputFromBinderForm, isBinderForm, thermodynamicHeatSection, type BinderFormConversion } from "../../curing/binder-form-input";
 import { THERMODYNAMIC_HEAT_LABEL } from "../../curing/thermodynamic-heat";
 
 export const summary = "curing advisory: element temperature, maturity, strength, curing period and risk flags";
 
-
-const round = (x: number, digits: number) => Math.round(x * 10 ** digits) / 10 ** digits;
-
-function thermodynamicHeatSection(conversion: BinderFormConversion) {
-  const heat = conversion.heat;
-  return {
-    method: "heat released = enthalpy of the reacted anhydrous binder and water − enthalpy of the equilibrium assemblage and pore solution, at the calculation temperature",
-    temperatureC: heat.temperatureC,
-    activationEnergyJPerMol: heat.activationEnergyJPerMol,
-    curve: heat.points.map((p) => ({ ageDays: round(p.ageDays, 4), equivalentAgeH: round(p.equivalentAgeH, 3), heatJPerGBinder: round(p.heatJPerGBinder, 1), cumulativeHeatJPerG: round(p.cumulativeHeatJPerG, 1) })),
-    largestDecreaseJPerG: round(heat.largestDecreaseJPerG, 2),
-    presetLabels: conversion.binder.presetLabels,
-    note: "enthalpies of the anhydrous reactants and of the hydrates are recalled values (lib/data/binders/anhydrous-enthalpies.json and the cement data set); a fully hydrated ordinary Portland cement comes out about 5 % above the published 450-520 J/g",
-  };
-}
 
 export async function run(args: string[]): Promise<number> {
   const read = readJsonInput(args);

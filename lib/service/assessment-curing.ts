@@ -28,7 +28,7 @@ export type AssessmentCuringAdvice = CuringAdvice & { perPhaseHeatCheck?: PerPha
  *
  * The thermodynamic curve is computed once per data set as loaded: a Monte Carlo sample reads the reference run's
  * curve from the warm-start book, so its element temperature, and the curing peak its DEF check uses, are the
- * deterministic run's (the heat's data uncertainty is not sampled).
+ * deterministic run's (the heat's data uncertainty is not sampled). Neither it nor the reference run computes the check.
  */
 export function assessmentCuring(input: AssessInput, binder: BinderSystem, dataset: Dataset, book: WarmStartBook | undefined): { curing?: AssessmentCuringAdvice; warnings: CuringHeatWarning[] } {
   const thermal = input.curing.thermal;
@@ -38,8 +38,8 @@ export function assessmentCuring(input: AssessInput, binder: BinderSystem, datas
   if (book?.mode === "record") book.heatCurve = computed.curve;
   if (!computed.curve) return { curing: adviseCuring(thermal), warnings: computed.warning ? [computed.warning] : [] };
   const curing = adviseCuring({ ...thermal, heatCurve: computed.curve }, { heatCurveLabel: THERMODYNAMIC_HEAT_LABEL, heatCurveSource: "thermodynamic" });
-  // A Monte Carlo sample needs only the flags; the check is for the deterministic result.
-  if (book?.mode === "read") return { curing, warnings: [] };
+  // The Monte Carlo path (its reference run and its samples) needs only the flags; the check is for the deterministic result.
+  if (book) return { curing, warnings: [] };
   const perPhase = adviseCuring(thermal);
   const t = perPhase.temperature;
   return { curing: { ...curing, perPhaseHeatCheck: { label: perPhase.heatModel.label, peakCoreC: t.peakCoreC, peakTimeH: t.peakTimeH, maxDifferenceC: t.maxDifferenceC } }, warnings: [] };

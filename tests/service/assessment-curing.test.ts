@@ -93,6 +93,7 @@ describe("the curing advice of an assessment", () => {
     const book = newWarmStartBook();
     const reference = assessmentCuring(input, binder, dataset, book);
     expect(book.heatCurve).not.toBeUndefined();
+    expect(reference.curing!.perPhaseHeatCheck).toBeUndefined();
     const sampled = sampleDataset(dataset, createRng(7, 3));
     const sample = assessmentCuring(input, binder, sampled, readingBook(book));
     expect(sample.curing!.temperature.peakCoreC).toBe(reference.curing!.temperature.peakCoreC);

@@ -19,3 +19,5 @@ export const referenceTemperatureK = 298.15;
  * their own 18.015268 g/mol internally; the 7·10⁻⁷ relative difference is immaterial.
  */
 export const waterMolarMassKgPerMol = 0.01801528;
+/** Standard atmosphere, bar: 101.325 kPa exactly (10th CGPM 1954, Resolution 4). */
+export const standardAtmosphereBar = 1.01325;

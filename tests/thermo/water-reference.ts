@@ -14,8 +14,11 @@ export type LiquidReferencePoint = {
 };
 export type SaturationReferencePoint = { temperatureC: number; temperatureK: number; saturationPressureBar: number };
 
+export type BoilingReferencePoint = { pressureBar: number; temperatureK: number };
+
 export const liquidReference: LiquidReferencePoint[] = reference.liquid;
 export const saturationReference: SaturationReferencePoint[] = reference.saturation;
+export const boilingReference: BoilingReferencePoint[] = reference.boiling;
 
 export function relativeDeviation(value: number, referenceValue: number): number {
   return Math.abs(value / referenceValue - 1);

@@ -11,6 +11,7 @@ import {
   hydrationModelData,
   maturityStrengthData,
 } from "./curing-data";
+import { curingModelWarnings, type CuringModelWarning } from "./model-range-warnings";
 import { minimumCuringPeriod, type CuringClass, type CuringDurationResult } from "./curing-duration";
 import { curingFlags } from "./curing-flags";
 import { simulateElementTemperature, type FaceBoundary } from "./element-temperature";
@@ -68,6 +69,8 @@ export type CuringAdvice = {
   coldWeather: FreezingAssessment;
   flags: Flag[];
   cautions: CuringCaution[];
+  /** Where the result lies outside what its models hold (`model-range-warnings.ts`); empty when it does not. */
+  warnings: CuringModelWarning[];
 };
 
 function curingScms(input: CuringInput): ScmFraction[] {
@@ -321,6 +324,11 @@ export function adviseCuring(input: CuringInput, options: AdviseCuringOptions = 
     coldWeather,
     flags,
     cautions: [...curingCautions],
+    warnings: curingModelWarnings({
+      maxTemperatureC: thermal.maxTemperatureC,
+      maxSourceEquivalentAgeH: Math.max(...thermal.finalSourceEquivalentAgeH),
+      heatCurveLastAgeH: heatSource.lastEquivalentAgeH,
+    }),
   };
 }
 

@@ -17,6 +17,8 @@ export interface HeatSource {
   /** Apparent activation energy used to convert real time to equivalent age, J/mol. */
   activationEnergyJPerMol: number;
   cumulativeHeatJPerKgBinder(equivalentAgeH: number): number;
+  /** Last equivalent age a sampled curve covers, h (the heat is held at its last value beyond); absent for a closed form. */
+  lastEquivalentAgeH?: number;
 }
 
 export type DefaultHeatSourceDetails = {
@@ -71,6 +73,7 @@ export function sampledHeatSource(
     label,
     referenceTemperatureC,
     activationEnergyJPerMol,
+    lastEquivalentAgeH: last.equivalentAgeH,
     cumulativeHeatJPerKgBinder(ageH) {
       if (ageH <= first.equivalentAgeH) {
         return first.equivalentAgeH > 0 ? Math.max(0, (first.cumulativeHeatJPerKgBinder * ageH) / first.equivalentAgeH) : first.cumulativeHeatJPerKgBinder;

@@ -46,6 +46,10 @@ function noteOf(w: Record<string, unknown>): string {
       return `The paste is nearly dry (${num(w.poreWaterG, 2)} g of pore water per 100 g binder): the C-S-H could be given only ${num(100 * (w.boundFraction as number), 2)} % of the alkalis, not the ${num(100 * (w.distributionRatioFraction as number), 2)} % its distribution ratio asks, without the pore solution vanishing. Dissolved alkalis and pH are upper estimates.`;
     case "thermodynamic_heat_unavailable":
       return `The heat of hydration could not be computed from the data set's enthalpies (${text(w.message)}): the element temperature uses the classic per-phase heats of Lerch & Bogue (1934) with the hydration curve of Schindler & Folliard (2005).`;
+    case "element_temperature_above_boiling":
+      return `The element temperature reaches ${num(w.maxTemperatureC, 4)} °C, at or above the ${num(w.boilingPointC, 4)} °C at which its pore water boils at atmospheric pressure. The heat model has no evaporation and the data set ends at 100 °C; cement hydrated this hot also reaches lower long-term degrees than the heat curve assumes (the crossover effect). The peak is an upper estimate: the element needs thermal control whatever the exact figure.`;
+    case "heat_curve_exceeded":
+      return `Part of the element reaches an equivalent age of ${num(w.maxEquivalentAgeH)} h, beyond the last ${num(w.lastCurveAgeH)} h of the heat curve, where the heat is held at its last value: later temperatures are low estimates. Enter a longer curve or shorten the run.`;
     case "scm_model_extrapolated":
       return w.reason === "temperature_outside_data"
         ? `The reaction degree of the ${text(w.type)} is extrapolated: the curing temperature ${num(w.curingTemperatureC)} °C lies outside the ${num(w.minC)}–${num(w.maxC)} °C of its data.`

@@ -113,6 +113,8 @@ export type TemperatureHistoryResult = {
     serviceTemperatureClampedFromC: number | null;
     /** Null when no curing temperature was given. */
     curingTemperatureC: number | null;
+    /** Set when the curing temperature lay above the data set's 100 °C and was evaluated at that limit (`curingAboveDataSet`). */
+    curingTemperatureClampedFromC: number | null;
     /** The temperature above which ettringite is no longer stable in this mix (null unless a limit was found). */
     ettringiteStabilityTemperatureC: number | null;
     stabilityLimit: StabilityLimit;
@@ -152,6 +154,12 @@ export type TemperatureHistoryOptions = {
   points: number;
   /** Maximum concrete temperature during curing, °C (`curing.maxTemperatureC`). */
   curingMaxTemperatureC?: number;
+  /**
+   * A curing temperature above the data set's 100 °C: refused (the default, for an entered value), or evaluated at
+   * 100 °C and said so (`curingTemperatureClampedFromC`), for a peak computed by the element model. Ettringite only
+   * loses stability on heating, so the state at 100 °C is the nearest the data can give to the hotter one.
+   */
+  curingAboveDataSet?: "refuse" | "evaluate-at-limit";
   sweepFromC?: number;
   sweepToC?: number;
   toleranceC?: number;
@@ -610,7 +618,9 @@ export function temperatureHistory(
 ): { ok: true; value: TemperatureHistoryResult } | { ok: false; error: TemperatureHistoryError } {
   const service = serviceTemperatureForDef(base, exposure);
   const serviceC = service.temperatureC;
-  const curingC = options.curingMaxTemperatureC;
+  const curingWanted = options.curingMaxTemperatureC;
+  const clampCuring = options.curingAboveDataSet === "evaluate-at-limit" && curingWanted !== undefined && curingWanted > DATA_SET_MAX_C;
+  const curingC = clampCuring ? DATA_SET_MAX_C : curingWanted;
   const fromC = options.sweepFromC ?? DEFAULT_SWEEP_FROM_C;
   const toC = options.sweepToC ?? DEFAULT_SWEEP_TO_C;
   for (const [field, t] of [["exposure.serviceTemperatureC", serviceC], ["curing.maxTemperatureC", curingC], ["options.sweepFromC", fromC], ["options.sweepToC", toC]] as const) {
@@ -713,6 +723,7 @@ export function temperatureHistory(
         serviceTemperatureC: serviceC,
         serviceTemperatureClampedFromC: service.clampedFromC,
         curingTemperatureC: curingC ?? null,
+        curingTemperatureClampedFromC: clampCuring ? curingWanted! : null,
         ettringiteStabilityTemperatureC: stabilityLimit.kind === "found" ? stabilityLimit.temperatureC : null,
         stabilityLimit,
         atService: atService.value,

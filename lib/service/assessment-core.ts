@@ -196,6 +196,8 @@ export function assessWithDataset(input: AssessInput, binder: BinderSystem, data
   const temperature = temperatureHistory(base, exposure, {
     points,
     curingMaxTemperatureC,
+    // The element model's peak can exceed the data set's 100 °C (the curing warnings say why); its DEF state is then taken there.
+    curingAboveDataSet: "evaluate-at-limit",
     reduced: options.reduced,
     decisionTemperaturesC: curingMaxTemperatureC === undefined ? undefined : defDecisionTemperaturesC(curingMaxTemperatureC),
   });

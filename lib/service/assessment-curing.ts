@@ -1,11 +1,14 @@
 import type { BinderSystem } from "../cement/binder-system";
 import { adviseCuring, type CuringAdvice } from "../curing/advise-curing";
+import type { CuringModelWarning } from "../curing/model-range-warnings";
 import { THERMODYNAMIC_HEAT_LABEL, thermodynamicHeatCurve } from "../curing/thermodynamic-heat";
 import type { Dataset } from "../data/load-dataset";
 import type { HeatCurveInput, WarmStartBook } from "../scenarios/sweep";
 import type { AssessInput } from "../schema/assess-input";
 
 export type CuringHeatWarning = { code: "thermodynamic_heat_unavailable"; reason: string; message: string };
+/** The warnings of an assessment's curing part: the heat source fallback and the model-range warnings of the advice. */
+export type AssessmentCuringWarning = CuringHeatWarning | CuringModelWarning;
 
 /**
  * The element temperature the classic per-phase heats would give (Schindler & Folliard 2005 curve), beside the one the
@@ -30,19 +33,25 @@ export type AssessmentCuringAdvice = CuringAdvice & { perPhaseHeatCheck?: PerPha
  * curve from the warm-start book, so its element temperature, and the curing peak its DEF check uses, are the
  * deterministic run's (the heat's data uncertainty is not sampled). Neither it nor the reference run computes the check.
  */
-export function assessmentCuring(input: AssessInput, binder: BinderSystem, dataset: Dataset, book: WarmStartBook | undefined): { curing?: AssessmentCuringAdvice; warnings: CuringHeatWarning[] } {
+export function assessmentCuring(input: AssessInput, binder: BinderSystem, dataset: Dataset, book: WarmStartBook | undefined): { curing?: AssessmentCuringAdvice; warnings: AssessmentCuringWarning[] } {
   const thermal = input.curing.thermal;
   if (!thermal) return { warnings: [] };
-  if (thermal.heatCurve) return { curing: adviseCuring(thermal), warnings: [] };
+  if (thermal.heatCurve) {
+    const entered = adviseCuring(thermal);
+    return { curing: entered, warnings: entered.warnings };
+  }
   const computed = book?.mode === "read" && book.heatCurve !== undefined ? { curve: book.heatCurve, warning: undefined } : thermodynamicCurve(binder, dataset);
   if (book?.mode === "record") book.heatCurve = computed.curve;
-  if (!computed.curve) return { curing: adviseCuring(thermal), warnings: computed.warning ? [computed.warning] : [] };
+  if (!computed.curve) {
+    const fallback = adviseCuring(thermal);
+    return { curing: fallback, warnings: [...(computed.warning ? [computed.warning] : []), ...fallback.warnings] };
+  }
   const curing = adviseCuring({ ...thermal, heatCurve: computed.curve }, { heatCurveLabel: THERMODYNAMIC_HEAT_LABEL, heatCurveSource: "thermodynamic" });
   // The Monte Carlo path (its reference run and its samples) needs only the flags; the check is for the deterministic result.
-  if (book) return { curing, warnings: [] };
+  if (book) return { curing, warnings: curing.warnings };
   const perPhase = adviseCuring(thermal);
   const t = perPhase.temperature;
-  return { curing: { ...curing, perPhaseHeatCheck: { label: perPhase.heatModel.label, peakCoreC: t.peakCoreC, peakTimeH: t.peakTimeH, maxDifferenceC: t.maxDifferenceC } }, warnings: [] };
+  return { curing: { ...curing, perPhaseHeatCheck: { label: perPhase.heatModel.label, peakCoreC: t.peakCoreC, peakTimeH: t.peakTimeH, maxDifferenceC: t.maxDifferenceC } }, warnings: curing.warnings };
 }
 
 function thermodynamicCurve(binder: BinderSystem, dataset: Dataset): { curve: HeatCurveInput | null; warning?: CuringHeatWarning } {

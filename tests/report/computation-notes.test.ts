@@ -15,6 +15,8 @@ describe("computation notes", () => {
         { code: "clinker_reaction_limited_by_water", waterBinderRatio: 0.25, minimumSealed: 0.4195, maximumDegree: 0.596, phases: [{ phase: "alite", unlimitedDegree: 0.7512 }], supplementaryMaterials: [{ type: "slag", unlimitedDegree: 0.71 }] },
         { code: "alkali_uptake_limited_by_pore_water", boundFraction: 0.70499, distributionRatioFraction: 0.98420, poreWaterG: 0.2526 },
         { code: "thermodynamic_heat_unavailable", reason: "enthalpy_unavailable", message: "the data set has no enthalpy for the slag glass" },
+        { code: "element_temperature_above_boiling", maxTemperatureC: 117.813, boilingPointC: 99.9743, message: "" },
+        { code: "heat_curve_exceeded", maxEquivalentAgeH: 212.4, lastCurveAgeH: 168, message: "" },
         { code: "something_new" },
       ],
     });
@@ -29,6 +31,8 @@ describe("computation notes", () => {
       "Hydration is limited by the mixing water: at w/b 0.25 a sealed paste can react only to a degree of about 0.6 (w/b ÷ 0.42, Powers' model) before its capillary water is used up, so alite (computed 0.75) and the slag (computed 0.71) are held at 0.6.",
       "The paste is nearly dry (0.25 g of pore water per 100 g binder): the C-S-H could be given only 70 % of the alkalis, not the 98 % its distribution ratio asks, without the pore solution vanishing. Dissolved alkalis and pH are upper estimates.",
       "The heat of hydration could not be computed from the data set's enthalpies (the data set has no enthalpy for the slag glass): the element temperature uses the classic per-phase heats of Lerch & Bogue (1934) with the hydration curve of Schindler & Folliard (2005).",
+      "The element temperature reaches 117.8 °C, at or above the 99.97 °C at which its pore water boils at atmospheric pressure. The heat model has no evaporation and the data set ends at 100 °C; cement hydrated this hot also reaches lower long-term degrees than the heat curve assumes (the crossover effect). The peak is an upper estimate: the element needs thermal control whatever the exact figure.",
+      "Part of the element reaches an equivalent age of 212 h, beyond the last 168 h of the heat curve, where the heat is held at its last value: later temperatures are low estimates. Enter a longer curve or shorten the run.",
       "Note: something_new.",
     ]);
   });

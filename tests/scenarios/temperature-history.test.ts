@@ -180,6 +180,22 @@ describe("a service temperature below the data set's 0 °C", () => {
   });
 });
 
+describe("a curing peak above the data set's 100 °C, computed by the element model", () => {
+  it("is evaluated at 100 °C and said so when asked (ettringite only loses stability on heating), and refused by default", () => {
+    const r = temperatureHistory(base, exposure(), { points: 4, curingMaxTemperatureC: 117.8, curingAboveDataSet: "evaluate-at-limit" });
+    if (!r.ok) throw new Error(JSON.stringify(r.error));
+    expect(r.value.summary.curingTemperatureC).toBe(100);
+    expect(r.value.summary.curingTemperatureClampedFromC).toBe(117.8);
+    expect(r.value.summary.atCuring!.temperatureC).toBe(100);
+    expect(result.summary.curingTemperatureClampedFromC).toBeNull();
+    const flag = delayedEttringiteFormationFlag(r.value, { exposure: exposure(), curingMaxTemperatureC: 117.8, waterBinderRatio: 0.5 });
+    expect(flag?.severity).toBe("warning");
+    expect(flag?.explanation).toContain("At 100.0 °C (the data set's limit; the computed maximum concrete temperature is 117.8 °C)");
+    const refused = temperatureHistory(base, exposure(), { points: 4, curingMaxTemperatureC: 117.8 });
+    expect(!refused.ok && refused.error.code).toBe("temperature_out_of_range");
+  });
+});
+
 describe("bad input", () => {
   it("refuses a curing temperature outside the 0–100 °C of the data set, naming the field", () => {
     const r = temperatureHistory(base, exposure(), { points: 4, curingMaxTemperatureC: 120 });

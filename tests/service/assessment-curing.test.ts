@@ -74,7 +74,8 @@ describe("the curing advice of an assessment", () => {
     const heatCurve = { points: [{ equivalentAgeH: 0, cumulativeHeatJPerG: 0 }, { equivalentAgeH: 100, cumulativeHeatJPerG: 300 }], referenceTemperatureC: 20, activationEnergyJPerMol: 40000 };
     const { input, binder } = parsed({ ...plainCemI, curing: { thermal: { ...plainCemI.curing.thermal, heatCurve } } });
     const { curing, warnings } = assessmentCuring(input, binder, dataset, undefined);
-    expect(warnings).toEqual([]);
+    // The run is longer than the curve's 100 h: the element passes its end, which is told, not hidden.
+    expect(warnings.map((w) => w.code)).toEqual(["heat_curve_exceeded"]);
     expect(curing!.heatModel).toMatchObject({ label: "entered heat curve", source: "entered" });
   });
 
@@ -105,4 +106,30 @@ describe("the curing advice of an assessment", () => {
     const { input, binder } = parsed({ ...plainCemI, curing: {} });
     expect(assessmentCuring(input, binder, dataset, undefined)).toEqual({ warnings: [] });
   });
+});
+
+describe("an element the model heats past the boiling point", () => {
+  // 500 kg/m³ of the ASTM Type III preset at w/b 0.40 in a 2 m wall (a rich mix in a thick section; invented for the
+  // check): the thermodynamic heat drives the core above 100 °C, beyond the data set and the pore water's boiling point.
+  const rich = {
+    ...plainCemI,
+    project: { ...plainCemI.project, element: { type: "wall", thicknessM: 2, coverMm: 50 } },
+    binder: { cement: { kind: "preset", presetId: "astm-c150-type-iii" }, supplementaryMaterials: [] },
+    mix: { ...plainCemI.mix, waterBinderRatio: 0.4, binderContentKgPerM3: 500 },
+    curing: { thermal: { ...thermal, element: { thicknessM: 2, geometry: "symmetric" }, concrete: { binderKgPerM3: 500, waterBinderRatio: 0.4, fcm28MPa: 55 }, supplementaryMaterials: [], durationH: 168 } },
+  };
+
+  it("says so in the warnings, and the assessment still runs its DEF scenario at the data set's 100 °C", async () => {
+    const { input, binder } = parsed(rich);
+    const { curing, warnings } = assessmentCuring(input, binder, dataset, undefined);
+    expect(curing!.temperature.maxTemperatureC).toBeGreaterThan(100);
+    expect(warnings.map((w) => w.code)).toContain("element_temperature_above_boiling");
+    // Before, the temperature scenario refused the computed peak (outside 0–100 °C) and the DEF flag was missing.
+    const { runAssessment } = await import("../../lib/service/assess");
+    const r = await runAssessment(rich);
+    if (!r.ok) throw new Error(JSON.stringify(r.error));
+    expect(r.value.scenarioErrors.temperature).toBeUndefined();
+    expect(r.value.flags.find((f) => f.id === "delayed-ettringite-formation")?.severity).toBe("warning");
+    expect(r.value.warnings.map((w) => w.code)).toContain("element_temperature_above_boiling");
+  }, 60_000);
 });

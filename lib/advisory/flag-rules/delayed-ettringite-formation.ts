@@ -66,7 +66,7 @@ export function delayedEttringiteFormationFlag(
       ? "a positive saturation index (ettringite is present)"
       : `a saturation index of ${f2(state.ettringiteSaturationIndexWithoutIt)} (ΔrG ${f1(state.ettringiteFormationGibbsKJPerMol)} kJ/mol)`;
   const curingText = atCuring
-    ? `At ${f1(atCuring.temperatureC)} °C the formation reaction 6 Ca²⁺ + 2 Al(OH)4⁻ + 3 SO4²⁻ + 4 OH⁻ + 26 H2O → ettringite has ${indexText(atCuring)}, ` +
+    ? `At ${f1(atCuring.temperatureC)} °C${s.curingTemperatureClampedFromC != null ? ` (the data set's limit; the computed maximum concrete temperature is ${f1(s.curingTemperatureClampedFromC)} °C)` : ""} the formation reaction 6 Ca²⁺ + 2 Al(OH)4⁻ + 3 SO4²⁻ + 4 OH⁻ + 26 H2O → ettringite has ${indexText(atCuring)}, ` +
       `${ettringiteStableIn(atCuring) ? "so ettringite is still just stable in the model" : "so ettringite dissolves"}, ` +
       `and ${f1(atCuring.sulfate.outsideAftMolSO3PerM3)} mol SO3 per m³ of concrete is held outside ettringite (in AFm and the pore solution).`
     : "";

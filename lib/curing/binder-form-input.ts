@@ -1,10 +1,10 @@
-import { z } from "zod";
 import { binderSystemFromInput } from "../cement/binder-system";
 import { binderSystemIssue } from "../cement/binder-system-issue";
 import { clinkerPhase, type ClinkerPhaseId } from "../cement/clinker-phases";
 import { partitionCementOxides } from "../cement/clinker-partition";
 import { oxideMolarMassGPerMol } from "../cement/oxides";
 import type { ResolvedBinder } from "../cement/resolve-binder";
+import { curingBinderFormSchema, firstCuringBinderFormIssue } from "../schema/curing-binder-form";
 import { thermodynamicHeatCurve, type ThermodynamicHeatCurve } from "./thermodynamic-heat";
 
 /**
@@ -23,17 +23,6 @@ export type BinderFormConversion = {
   binder: ResolvedBinder;
   heat: ThermodynamicHeatCurve;
 };
-
-const heatCalculationSchema = z
-  .object(
-    {
-      temperatureC: z.number({ error: "binder.heatCalculation.temperatureC must be a number" }).min(5, { error: "binder.heatCalculation.temperatureC must be between 5 and 60 °C" }).max(60, { error: "binder.heatCalculation.temperatureC must be between 5 and 60 °C" }).optional(),
-      activationEnergyJPerMol: z.number({ error: "binder.heatCalculation.activationEnergyJPerMol must be a number" }).min(10000, { error: "binder.heatCalculation.activationEnergyJPerMol must be between 10000 and 80000 J/mol" }).max(80000, { error: "binder.heatCalculation.activationEnergyJPerMol must be between 10000 and 80000 J/mol" }).optional(),
-      points: z.number({ error: "binder.heatCalculation.points must be a number" }).int({ error: "binder.heatCalculation.points must be a whole number" }).min(4, { error: "binder.heatCalculation.points must be between 4 and 40" }).max(40, { error: "binder.heatCalculation.points must be between 4 and 40" }).optional(),
-    },
-    { error: "binder.heatCalculation must be an object" },
-  );
-const heatCalculationKeys = ["temperatureC", "activationEnergyJPerMol", "points"];
 
 /** True when the raw input uses the binder form. */
 export function isBinderForm(raw: unknown): raw is Record<string, unknown> & { binder: unknown } {
@@ -82,28 +71,22 @@ function curingCementPhases(binder: ResolvedBinder): { ok: true; value: Record<s
 }
 
 /**
- * Converts the binder form to the curing input and computes its thermodynamic heat curve. Errors name the field
+ * Converts the binder form (validated by `curingBinderFormSchema`, `lib/schema/curing-binder-form.ts`) to the curing
+ * input and computes its thermodynamic heat curve. Errors name the field
  * in the input's own terms (`binder.cement.presetId`, `concrete.waterBinderRatio`, `binder.supplementaryMaterials`).
  */
 export function curingInputFromBinderForm(raw: Record<string, unknown>): { ok: true; value: BinderFormConversion } | { ok: false; error: BinderFormError } {
-  const form = raw.binder;
-  if (typeof form !== "object" || form === null || Array.isArray(form)) return fail("binder", "binder must be an object with cement and supplementaryMaterials");
+  // Which form the input is in comes first: the schema would drop a stray phase-form field without a word.
   if ("cement" in raw) return fail("cement", "give either cement (phase form) or binder (binder form), not both");
   if ("supplementaryMaterials" in raw) return fail("supplementaryMaterials", "with the binder form, give supplementaryMaterials inside binder");
   if ("heatCurve" in raw) return fail("heatCurve", "give either heatCurve or binder: the binder form computes the heat curve");
-  const { cement, supplementaryMaterials, heatCalculation, ...rest } = form as Record<string, unknown>;
-  const extra = Object.keys(rest);
-  if (extra.length > 0) return fail(`binder.${extra[0]}`, `binder allows only cement, supplementaryMaterials and heatCalculation (got ${extra[0]})`);
-  if (typeof heatCalculation === "object" && heatCalculation !== null) {
-    const unknown = Object.keys(heatCalculation).find((k) => !heatCalculationKeys.includes(k));
-    if (unknown) return fail(`binder.heatCalculation.${unknown}`, `binder.heatCalculation allows only ${heatCalculationKeys.join(", ")} (got ${unknown})`);
+  const parsed = curingBinderFormSchema.safeParse(raw);
+  if (!parsed.success) {
+    const issue = firstCuringBinderFormIssue(parsed.error);
+    return fail(issue.field, issue.message);
   }
-  const calc = heatCalculationSchema.safeParse(heatCalculation ?? {});
-  if (!calc.success) {
-    const issue = calc.error.issues[0];
-    return fail(["binder", "heatCalculation", ...issue.path.map(String)].join("."), issue.message);
-  }
-  const concrete = (typeof raw.concrete === "object" && raw.concrete !== null ? raw.concrete : {}) as Record<string, unknown>;
+  const { cement, supplementaryMaterials, heatCalculation = {} } = parsed.data.binder;
+  const concrete = parsed.data.concrete;
   const system = binderSystemFromInput({
     cement,
     supplementaryMaterials,
@@ -125,9 +108,9 @@ export function curingInputFromBinderForm(raw: Record<string, unknown>): { ok: t
   const phases = curingCementPhases(binder);
   if (!phases.ok) return fail("binder.cement", phases.error);
   const curve = thermodynamicHeatCurve(binder, {
-    ...(calc.data.temperatureC !== undefined ? { temperatureC: calc.data.temperatureC } : {}),
-    ...(calc.data.activationEnergyJPerMol !== undefined ? { activationEnergyJPerMol: calc.data.activationEnergyJPerMol } : {}),
-    ...(calc.data.points !== undefined ? { points: calc.data.points } : {}),
+    ...(heatCalculation.temperatureC !== undefined ? { temperatureC: heatCalculation.temperatureC } : {}),
+    ...(heatCalculation.activationEnergyJPerMol !== undefined ? { activationEnergyJPerMol: heatCalculation.activationEnergyJPerMol } : {}),
+    ...(heatCalculation.points !== undefined ? { points: heatCalculation.points } : {}),
   });
   if (!curve.ok) {
     const e = curve.error;

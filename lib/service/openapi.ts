@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { assessInput } from "../schema/assess-input";
+import { curingBinderFormSchema } from "../schema/curing-binder-form";
 import { curingInputSchema } from "../schema/curing-input";
 import { equilibrateInput } from "../schema/equilibrate-input";
 import { hydrateInput } from "../schema/hydrate-input";
@@ -81,8 +82,9 @@ export function openApiDocument(): Record<string, unknown> {
       "/cure": {
         post: {
           ...computation("curing advisory: element temperature, maturity, strength, curing period, flags", "CuringInput").post,
+          requestBody: { required: true, content: json({ oneOf: [ref("CuringInput"), ref("CuringBinderFormInput")] }) },
           description:
-            "The body is a CuringInput, or the same without cement, supplementaryMaterials and heatCurve but with `binder: { cement, supplementaryMaterials, heatCalculation? }` as in AssessInput: the heat curve is then the thermodynamic heat of hydration of that binder, and the result carries a `thermodynamicHeat` section. That second form is checked field by field by the service (lib/curing/binder-form-input.ts), not by a schema of its own here.",
+            "The body is a CuringInput, or a CuringBinderFormInput: the same without cement, supplementaryMaterials and heatCurve but with `binder: { cement, supplementaryMaterials, heatCalculation? }` as in AssessInput. The heat curve is then the thermodynamic heat of hydration of that binder, and the result carries a `thermodynamicHeat` section. The binder rules of AssessInput (blended presets, SCM totals, the binder model's w/b and binder content ranges) are checked when the binder is resolved.",
         },
       },
       "/hydrate": computation("hydrate assemblage of a binder at an age", "HydrateInput"),
@@ -131,6 +133,7 @@ export function openApiDocument(): Record<string, unknown> {
       schemas: {
         EquilibrateInput: schemaOf(equilibrateInput),
         CuringInput: schemaOf(curingInputSchema),
+        CuringBinderFormInput: schemaOf(curingBinderFormSchema),
         HydrateInput: schemaOf(hydrateInput),
         AssessInput: schemaOf(assessInput),
         SaveAssessment: schemaOf(saveAssessmentBody),

@@ -42,6 +42,11 @@ describe("GET /api/v1/openapi.json", () => {
     expect(schemas.EquilibrateInput.properties?.temperatureC).toMatchObject({ minimum: 0, maximum: 100 });
     expect(Object.keys(schemas.EquilibrateInput.properties ?? {}).sort()).toEqual(Object.keys(equilibrateInput.shape).sort());
     expect(schemas.AssessInput.properties).toHaveProperty("binder");
+    // POST /cure takes either form of the curing input, each from its own zod schema.
+    expect(schemas.CuringBinderFormInput.properties).toHaveProperty("binder");
+    expect(schemas.CuringBinderFormInput.properties).not.toHaveProperty("cement");
+    const cureBody = (body.paths as Record<string, { post: { requestBody: { content: Record<string, { schema: unknown }> } } }>)["/cure"].post.requestBody.content["application/json"].schema;
+    expect(cureBody).toEqual({ oneOf: [{ $ref: "#/components/schemas/CuringInput" }, { $ref: "#/components/schemas/CuringBinderFormInput" }] });
   });
 });
 

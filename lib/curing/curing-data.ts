@@ -66,7 +66,7 @@ const hydrationSchema = z.object({
   tau: z.object({
     coefficientH: z.number(),
     exponentC3A: z.number(),
-    exponentC4AF: z.number(),
+    exponentC3S: z.number(),
     exponentBlaine: z.number(),
     exponentSO3: z.number(),
     slagExpFactor: z.number(),

@@ -26,7 +26,7 @@ export function flyAshTerms(binder: CuringBinder): { fraction: number; caoMassFr
 
 /**
  * Regressions of Schindler & Folliard (2005), ACI Mater. J. 102, 24 (recalled; see the data file):
- *   τ  = 66.78 pC3A^−0.154 pC4AF^−0.401 Blaine^−0.804 pSO3^−0.758 exp(2.187 p_slag + 9.5 p_FA p_FA-CaO)   [h]
+ *   τ  = 66.78 pC3A^−0.154 pC3S^−0.401 Blaine^−0.804 pSO3^−0.758 exp(2.187 p_slag + 9.5 p_FA p_FA-CaO)   [h]
  *   β  = 181.4 pC3A^0.146 pC3S^0.227 Blaine^−0.535 pSO3^0.558 exp(−0.647 p_slag)
  *   αu = 1.031 w/cm / (0.194 + w/cm) + 0.50 p_FA + 0.30 p_slag  (≤ 1)
  * Phase fractions are of the cement, SCM fractions of the binder, Blaine in m²/kg.
@@ -34,7 +34,6 @@ export function flyAshTerms(binder: CuringBinder): { fraction: number; caoMassFr
 export function hydrationParameters(binder: CuringBinder): HydrationParameters {
   const phases = binder.cementPhases;
   const c3a = Math.max(floor, phases.C3A);
-  const c4af = Math.max(floor, phases.C4AF);
   const c3s = Math.max(floor, phases.C3S);
   const so3 = Math.max(floor, phases.SO3 ?? model.defaults.so3MassFraction.value);
   const blaine = binder.blaineM2PerKg ?? model.defaults.blaineM2PerKg.value;
@@ -44,7 +43,7 @@ export function hydrationParameters(binder: CuringBinder): HydrationParameters {
   const tauH =
     t.coefficientH *
     c3a ** t.exponentC3A *
-    c4af ** t.exponentC4AF *
+    c3s ** t.exponentC3S *
     blaine ** t.exponentBlaine *
     so3 ** t.exponentSO3 *
     Math.exp(t.slagExpFactor * slag + t.flyAshCaOExpFactor * ash.fraction * ash.caoMassFraction);

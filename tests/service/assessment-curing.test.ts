@@ -51,8 +51,8 @@ describe("the curing advice of an assessment", () => {
     // The per-phase heats stay beside it as the check (Lerch & Bogue 1934; Taylor 1997).
     expect(curing!.heatModel.perPhaseCheckJPerGCement.lerchBogue).toBeGreaterThan(400);
     expect(curing!.heatModel.cementFractionOfBinder).toBe(1);
-    // Beside it, the element temperature the per-phase heats give: two published heat models, 22 °C apart at the peak
-    // for this 0.45 m wall (64.3 against 42.3 °C when written).
+    // Beside it, the element temperature the per-phase heats give: two published heat models, 13 °C apart at the peak
+    // for this 0.45 m wall (64.3 against 50.8 °C when written; 42.3 °C before the τ regression was corrected to C3S).
     const perPhase = adviseCuring(input.curing.thermal!);
     expect(curing!.perPhaseHeatCheck).toEqual({ label: perPhase.heatModel.label, peakCoreC: perPhase.temperature.peakCoreC, peakTimeH: perPhase.temperature.peakTimeH, maxDifferenceC: perPhase.temperature.maxDifferenceC });
     expect(curing!.temperature.peakCoreC - perPhase.temperature.peakCoreC).toBeGreaterThan(10);

@@ -92,6 +92,11 @@ export type HydrationOptions = {
   /** Extra phases to suppress, and default constraints to lift. */
   suppress?: readonly string[];
   enable?: readonly string[];
+  /**
+   * Age of the paste, d, for the age-dependent kinetic constraints (a phase that forms only over weeks, such as
+   * thaumasite); absent, the long-term view of the durability scenarios, in which such a phase may form.
+   */
+  ageDays?: number;
   warmStart?: SerializedState;
   /** Fractions of Na and K bound in C-S-H at a neighbouring age: the starting guess of the uptake iteration. */
   alkaliBoundFraction?: Record<string, number>;
@@ -132,7 +137,7 @@ export function hydratePaste(
   }
   const byId = speciesById(dataset);
   const elementsOf = (id: string): Record<string, number> => byId.get(id)?.elements ?? {};
-  const suppressed = suppressedPhases(options.temperatureC, { enable: options.enable, suppress: options.suppress });
+  const suppressed = suppressedPhases(options.temperatureC, { enable: options.enable, suppress: options.suppress, ageDays: options.ageDays });
   const uptake = alkaliUptakeByCsh(composition.reactedElementsMol, (totals, warmStart) =>
     equilibrateSystem({
       temperatureC: options.temperatureC,

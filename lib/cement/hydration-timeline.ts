@@ -71,6 +71,7 @@ export function hydrationTimeline(
     const paste = hydratePaste(point.composition, {
       temperatureC: options.temperatureC,
       binderContentKgPerM3: binder.mix.binderContentKgPerM3,
+      ageDays: point.ageDays,
       suppress: options.suppress,
       enable: options.enable,
       warmStart,

@@ -261,7 +261,7 @@ export function thermodynamicHeatCurve(binder: ResolvedBinder, options: HeatCurv
   let largestDecreaseJPerG = 0;
   let previous: number | undefined;
   for (const point of timeline.value) {
-    const paste = hydratePaste(point.composition, { temperatureC, binderContentKgPerM3: binder.mix.binderContentKgPerM3, warmStart, alkaliBoundFraction, dataset });
+    const paste = hydratePaste(point.composition, { temperatureC, binderContentKgPerM3: binder.mix.binderContentKgPerM3, ageDays: point.ageDays, warmStart, alkaliBoundFraction, dataset });
     if (!paste.ok) return { ok: false, error: { code: "equilibrium_failed", ageDays: point.ageDays, failure: paste.error, message: `the equilibrium at age ${point.ageDays.toPrecision(3)} d failed: ${paste.error.code}` } };
     warmStart = paste.value.assemblage.state;
     const reacted = point.composition.reactedElementsMol;

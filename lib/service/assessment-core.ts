@@ -127,7 +127,9 @@ export function assessWithDataset(input: AssessInput, binder: BinderSystem, data
   const overrides = { suppress: input.options.suppressedPhases, enable: input.options.allowedPhases, dataset };
   const reacted = system.value.composition.reactedElementsMol;
   const warmFrom = (start: HydratedPaste | undefined) => (start ? { warmStart: start.assemblage.state, alkaliBoundFraction: alkaliBoundFractionOf(start, reacted) } : {});
-  const paste = hydratePaste(system.value.composition, { temperatureC, binderContentKgPerM3: input.mix.binderContentKgPerM3, ...overrides, ...warmFrom(bookedPaste(book, "base", temperatureC)) });
+  // The paste at its age: the age-dependent kinetic constraints apply (none without an age, in the degrees mode).
+  const ageDays = input.age.mode === "age" ? input.age.ageDays : undefined;
+  const paste = hydratePaste(system.value.composition, { temperatureC, binderContentKgPerM3: input.mix.binderContentKgPerM3, ageDays, ...overrides, ...warmFrom(bookedPaste(book, "base", temperatureC)) });
   if (!paste.ok) return domainError(paste.error.code, pasteFailureMessage(paste.error, { age: input.age, temperatureC, composition: system.value.composition }));
   recordPaste(book, "base", temperatureC, paste.value);
   let timeline: TimelineEntry[] = [];

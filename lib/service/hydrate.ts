@@ -62,7 +62,9 @@ export function runHydrate(raw: unknown): ServiceOutcome<HydrateOutput> {
   }
   const temperatureC = input.age.mode === "age" ? input.age.curingTemperatureC : (input.temperatureC ?? DEFAULT_TEMPERATURE_C);
   const overrides = { suppress: input.suppressedPhases, enable: input.allowedPhases, dataset: dataset.value };
-  const paste = hydratePaste(system.value.composition, { temperatureC, binderContentKgPerM3: input.mix.binderContentKgPerM3, ...overrides });
+  // The paste at its age: the age-dependent kinetic constraints apply (none without an age, in the degrees mode).
+  const ageDays = input.age.mode === "age" ? input.age.ageDays : undefined;
+  const paste = hydratePaste(system.value.composition, { temperatureC, binderContentKgPerM3: input.mix.binderContentKgPerM3, ageDays, ...overrides });
   if (!paste.ok) return domainError(paste.error.code, pasteFailureMessage(paste.error, { age: input.age, temperatureC, composition: system.value.composition }));
   let timeline: TimelineEntry[] = [];
   const warnings: HydrateOutput["warnings"] = [...paste.value.warnings];

@@ -28,7 +28,8 @@ describe("hydrationTimeline", () => {
   it("gives at every age the assemblage of the paste solved on its own at that age", () => {
     const tolerance = alkaliUptake.iterations.relativeTolerance;
     for (const [index, point] of points.value.entries()) {
-      const alone = hydratePaste(point.composition, { temperatureC: options.temperatureC, binderContentKgPerM3: 360 });
+      // At its age, as the timeline solves it (the age-dependent kinetic constraints: no thaumasite before 28 d).
+      const alone = hydratePaste(point.composition, { temperatureC: options.temperatureC, binderContentKgPerM3: 360, ageDays: point.ageDays });
       if (!alone.ok) throw new Error(JSON.stringify(alone.error));
       const entry = timeline.value.entries[index];
       expect(entry.ageDays).toBeCloseTo(point.ageDays, 12);
@@ -73,5 +74,32 @@ describe("hydrationTimeline with ages the engine cannot solve", () => {
     if (timeline.ok) return;
     expect(timeline.error.code).toBe("time_limit");
     expect(timeline.error.ageDays).toBeCloseTo(1 / 24, 10);
+  });
+});
+
+describe("the age-dependent kinetic constraint on thaumasite", () => {
+  // CEM II/A-LL preset (limestone, sulfate), w/b 0.5, cured at 5 °C: the conditions that favour thaumasite (Crammond 2003).
+  const limestone = binderSystemFromInput({
+    cement: { kind: "preset", presetId: "en197-cem-ii-a-ll" },
+    mix: { waterBinderRatio: 0.5, binderContentKgPerM3: 350 },
+    age: { mode: "age", ageDays: 28, curingTemperatureC: 5 },
+  });
+  if (!limestone.ok) throw new Error("binder invalid");
+  const early = binderTimeline(limestone.value.binder, [0.25], 5);
+  if (!early.ok) throw new Error("composition invalid");
+  const composition = early.value[0].composition;
+  const thaumasiteG = (paste: ReturnType<typeof hydratePaste>) => {
+    if (!paste.ok) throw new Error(JSON.stringify(paste.error));
+    return paste.value.phases.find((p) => p.id === "thaumasite")?.grams ?? 0;
+  };
+
+  it("keeps thaumasite out of a 6-hour-old paste, which equilibrium alone would give several grams per 100 g binder (slow formation: Bensted 1999; Crammond 2003)", () => {
+    expect(thaumasiteG(hydratePaste(composition, { temperatureC: 5, binderContentKgPerM3: 350 }))).toBeGreaterThan(1);
+    expect(thaumasiteG(hydratePaste(composition, { temperatureC: 5, binderContentKgPerM3: 350, ageDays: 0.25 }))).toBe(0);
+  });
+
+  it("lifts at 28 days, and a user can lift it earlier with enable", () => {
+    expect(thaumasiteG(hydratePaste(composition, { temperatureC: 5, binderContentKgPerM3: 350, ageDays: 28 }))).toBeGreaterThan(1);
+    expect(thaumasiteG(hydratePaste(composition, { temperatureC: 5, binderContentKgPerM3: 350, ageDays: 0.25, enable: ["thaumasite"] }))).toBeGreaterThan(1);
   });
 });

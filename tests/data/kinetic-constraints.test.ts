@@ -25,12 +25,23 @@ describe("default kinetic constraints", () => {
     expect(defaultSuppressedPhases(80)).not.toContain("siliceous-hydrogarnet");
   });
 
-  it("keep thaumasite, aragonite and the Fe-siliceous hydrogarnet active (thaumasite is a thermodynamic phase at low temperature, Schmidt et al. 2008; Fe-siliceous hydrogarnet observed at 20 °C, Dilnesa et al. 2014)", () => {
+  it("keep thaumasite, aragonite and the Fe-siliceous hydrogarnet active where no age is given, the durability scenarios' long-term view (thaumasite is a thermodynamic phase at low temperature, Schmidt et al. 2008; Fe-siliceous hydrogarnet observed at 20 °C, Dilnesa et al. 2014)", () => {
     for (const t of [5, 25]) {
       expect(defaultSuppressedPhases(t)).not.toContain("thaumasite");
       expect(defaultSuppressedPhases(t)).not.toContain("aragonite");
       expect(defaultSuppressedPhases(t)).not.toContain("fe-siliceous-hydrogarnet");
     }
+  });
+
+  it("suppress thaumasite in a paste younger than 28 days, not at 28 days or later (slow formation: Bensted 1999; Crammond 2003)", () => {
+    expect(defaultSuppressedPhases(5, 1)).toContain("thaumasite");
+    expect(defaultSuppressedPhases(5, 28)).not.toContain("thaumasite");
+    expect(suppressedPhases(5, { ageDays: 7 })).toContain("thaumasite");
+    expect(suppressedPhases(5, { ageDays: 7, enable: ["thaumasite"] })).not.toContain("thaumasite");
+    // An age bound applies only where the age is known.
+    const ageBound = { phase: "x", reason: "a reason long enough", source: "s (2000)", whenAgeDaysBelow: 28 };
+    expect(constraintApplies(ageBound, 20)).toBe(false);
+    expect(constraintApplies(ageBound, 20, 27.9)).toBe(true);
   });
 
   it("apply a temperature bound strictly (50 °C is not below 50 °C)", () => {

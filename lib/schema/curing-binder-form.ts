@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { cementInputSchema, scmInputSchema, scmTypes } from "./binder-input";
-import { binderIndependentCuringFields, checkCuringFields } from "./curing-input";
+import { binderIndependentCuringFields, boundedInteger, boundedNumber, checkCuringFields } from "./curing-input";
 
 /**
  * The binder form of the curing input (`cure` command and `POST /api/v1/cure`): the curing input without `cement`,
@@ -12,17 +12,12 @@ import { binderIndependentCuringFields, checkCuringFields } from "./curing-input
  */
 const heatCalculationKeys = ["temperatureC", "activationEnergyJPerMol", "points"] as const;
 
-function bounded(field: string, min: number, max: number, unit: string) {
-  const limits = `${field} must be between ${min} and ${max}${unit}`;
-  return z.number({ error: `${field} must be a number` }).min(min, { error: limits }).max(max, { error: limits });
-}
-
-/** Temperature 5–60 °C: the range of the hydration model's data (Parrot & Killoh constants at 20 °C with their Arrhenius terms). */
+/** The calculation temperature is held to 5–60 °C: the Parrot & Killoh constants refer to 20 °C and reach other temperatures only through their Arrhenius terms. */
 export const heatCalculationSchema = z.strictObject(
   {
-    temperatureC: bounded("binder.heatCalculation.temperatureC", 5, 60, " °C").optional(),
-    activationEnergyJPerMol: bounded("binder.heatCalculation.activationEnergyJPerMol", 10000, 80000, " J/mol").optional(),
-    points: bounded("binder.heatCalculation.points", 4, 40, "").int({ error: "binder.heatCalculation.points must be a whole number" }).optional(),
+    temperatureC: boundedNumber("binder.heatCalculation.temperatureC", 5, 60, " °C").optional(),
+    activationEnergyJPerMol: boundedNumber("binder.heatCalculation.activationEnergyJPerMol", 10000, 80000, " J/mol").optional(),
+    points: boundedInteger("binder.heatCalculation.points", 4, 40).optional(),
   },
   {
     error: (issue) =>

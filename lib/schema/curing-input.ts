@@ -13,7 +13,7 @@ const maxElementSteps = curingInputDefaults.maxTimeSteps.value;
  * placement 0–45 °C (ACI 305R/306R working range), steam hold up to 90 °C (liquid water at 1 bar).
  */
 
-function boundedNumber(field: string, min: number, max: number, unit = "") {
+export function boundedNumber(field: string, min: number, max: number, unit = "") {
   const limits = `${field} must be between ${min} and ${max}${unit}`;
   return z
     .number({ error: (issue) => (issue.input === undefined ? `${field} is required` : `${field} must be a number`) })
@@ -21,7 +21,7 @@ function boundedNumber(field: string, min: number, max: number, unit = "") {
     .max(max, { error: limits });
 }
 
-function boundedInteger(field: string, min: number, max: number) {
+export function boundedInteger(field: string, min: number, max: number) {
   return boundedNumber(field, min, max).int({ error: `${field} must be a whole number` });
 }
 
